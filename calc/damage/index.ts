@@ -1,0 +1,2 @@
+/** (not yet built) */
+export {};

@@ -1,0 +1,2 @@
+/** Physical constants and unit helpers shared by the calculation. */
+export { G } from './gravity.js';
