@@ -29,6 +29,8 @@ export interface Asce7Spectrum {
   SDS: number;
   SD1: number;
   TL: number;
+  /** Damping ratio; ordinates at other than 5 % are scaled by the damping correction factor. */
+  damping?: number | undefined;
 }
 
 /**
@@ -40,6 +42,8 @@ export interface EventSpectrum {
   pga: number;
   sa03: number;
   sa10: number;
+  /** Damping ratio; ordinates at other than 5 % are scaled by the damping correction factor. */
+  damping?: number | undefined;
 }
 
 /** Any spectrum the app can screen against. */
