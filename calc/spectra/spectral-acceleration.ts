@@ -1,0 +1,46 @@
+import { G } from '../units/gravity.js';
+import { asce7SpectralAcceleration } from './asce7-spectrum.js';
+import { requireNonNegative } from './checks.js';
+import { ec8SpectralAcceleration } from './ec8-spectrum.js';
+import { eventSpectralAcceleration } from './event-spectrum.js';
+import type { SpectrumSpec } from './spectrum-spec.js';
+
+/**
+ * Spectral acceleration Sa(T), in g, of any supported spectrum, at 5 % damping unless
+ * `spec.damping` (a ratio, 0.05 = 5 %) says otherwise.
+ *
+ * - `ec8`: EN 1998-1:2004 §3.2.2.2, η from eq. (3.6).
+ * - `asce7`: ASCE 7-16 §11.4.6. At damping ≠ 5 % the EN 1998-1 eq. (3.6) factor
+ *   η = max(0.55, √(10/(5+ξ%))) is applied — a common-practice extension, not ASCE 7.
+ * - `event`: the shaking-map shape of {@link eventShape}, with the same η extension.
+ *
+ * @param T period in s, finite and ≥ 0.
+ * @throws RangeError naming the bad value when T or a spec field is out of range.
+ */
+export function spectralAcceleration(spec: SpectrumSpec, T: number): number {
+  requireNonNegative('T', T);
+  switch (spec.kind) {
+    case 'ec8':
+      return ec8SpectralAcceleration(spec, T);
+    case 'asce7':
+      return asce7SpectralAcceleration(spec, T);
+    case 'event':
+      return eventSpectralAcceleration(spec, T);
+    default: {
+      const never: never = spec;
+      throw new RangeError(
+        `spec.kind must be 'ec8', 'asce7' or 'event', got ${JSON.stringify(never)}`,
+      );
+    }
+  }
+}
+
+/**
+ * Spectral displacement Sd(T) = Sa(T)·g·(T/2π)², in m (EN 1998-1:2004 §3.2.2.4, eq. 3.7),
+ * at the spec's damping like {@link spectralAcceleration}.
+ */
+export function spectralDisplacement(spec: SpectrumSpec, T: number): number {
+  const sa = spectralAcceleration(spec, T);
+  const w = T / (2 * Math.PI);
+  return sa * G * w * w;
+}
