@@ -10,13 +10,19 @@ export default tseslint.config(
   {
     languageOptions: { globals: { ...globals.browser, ...globals.node } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       // Imported text must never become markup (rule 5 of the guide).
       'no-restricted-properties': [
         'error',
         { property: 'innerHTML', message: 'Build DOM from text nodes; never assign HTML strings.' },
         { property: 'outerHTML', message: 'Build DOM from text nodes; never assign HTML strings.' },
-        { property: 'insertAdjacentHTML', message: 'Build DOM from text nodes; never insert HTML strings.' },
+        {
+          property: 'insertAdjacentHTML',
+          message: 'Build DOM from text nodes; never insert HTML strings.',
+        },
       ],
       'no-eval': 'error',
       'no-implied-eval': 'error',
@@ -29,7 +35,14 @@ export default tseslint.config(
       // calc/ must run unchanged in Node, workers and other harnesses: relative imports only.
       'no-restricted-imports': [
         'error',
-        { patterns: [{ regex: '^(?!\\.{1,2}/)', message: 'calc/ uses relative imports only and no packages.' }] },
+        {
+          patterns: [
+            {
+              regex: '^(?!\\.{1,2}/)',
+              message: 'calc/ uses relative imports only and no packages.',
+            },
+          ],
+        },
       ],
     },
   },

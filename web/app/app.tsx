@@ -1,0 +1,32 @@
+/**
+ * The app shell: router, bottom navigation and the update notice. Screens other than the
+ * building list load lazily, so the first load stays small; the service worker precaches
+ * them all, so they still open offline.
+ */
+import { ErrorBoundary, LocationProvider, Route, Router, lazy } from 'preact-iso';
+import { HomeScreen } from '../screens/home/home-screen.js';
+import { NavBar } from './nav-bar.js';
+import { NotFoundScreen } from './not-found-screen.js';
+import { UpdateNotice } from './update-notice.js';
+
+const SettingsScreen = lazy(() =>
+  import('../screens/settings/settings-screen.js').then((m) => m.SettingsScreen),
+);
+
+export function App() {
+  return (
+    <LocationProvider>
+      <div class="app">
+        <ErrorBoundary>
+          <Router>
+            <Route path="/" component={HomeScreen} />
+            <Route path="/settings" component={SettingsScreen} />
+            <Route default component={NotFoundScreen} />
+          </Router>
+        </ErrorBoundary>
+        <UpdateNotice />
+        <NavBar />
+      </div>
+    </LocationProvider>
+  );
+}

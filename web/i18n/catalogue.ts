@@ -1,0 +1,18 @@
+/**
+ * The message catalogue: every piece of UI text, by key. Components never hold text of their
+ * own; they call `t(key, params)`. A second language is a second catalogue with the same keys.
+ */
+import { app } from './en/app.js';
+import { screens } from './en/screens.js';
+
+/**
+ * English catalogue. Each area of the app adds its own section file under en/ and spreads it
+ * here, so parallel work does not collide in one file.
+ */
+export const en = {
+  ...app,
+  ...screens,
+} as const;
+
+export type MessageKey = keyof typeof en;
+export type Catalogue = Record<MessageKey, string>;
