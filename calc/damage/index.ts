@@ -1,2 +1,2 @@
-/** (not yet built) */
-export {};
+/** Damage states and the evidence that maps to them. */
+export * from './damage-state.js';

@@ -42,7 +42,7 @@ describe('update flow', () => {
       ],
       {
         cwd: repoRoot,
-        env: { ...process.env, GRAINLINE_BUILD_ID: SECOND_BUILD_ID },
+        env: { ...process.env, NODE_ENV: 'production', GRAINLINE_BUILD_ID: SECOND_BUILD_ID },
         stdio: 'inherit',
       },
     );

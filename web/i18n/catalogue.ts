@@ -4,6 +4,7 @@
  */
 import { app } from './en/app.js';
 import { screens } from './en/screens.js';
+import { posting } from './en/posting.js';
 
 /**
  * English catalogue. Each area of the app adds its own section file under en/ and spreads it
@@ -12,6 +13,7 @@ import { screens } from './en/screens.js';
 export const en = {
   ...app,
   ...screens,
+  ...posting,
 } as const;
 
 export type MessageKey = keyof typeof en;
