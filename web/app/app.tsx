@@ -9,9 +9,14 @@ import { NavBar } from './nav-bar.js';
 import { NotFoundScreen } from './not-found-screen.js';
 import { UpdateNotice } from './update-notice.js';
 
+// Route table. Each screen module is owned by its area; the shell only maps paths to them.
 const SettingsScreen = lazy(() =>
   import('../screens/settings/settings-screen.js').then((m) => m.SettingsScreen),
 );
+const SurveyScreen = lazy(() =>
+  import('../screens/survey/survey-screen.js').then((m) => m.SurveyScreen),
+);
+const MapScreen = lazy(() => import('../map/map-screen.js').then((m) => m.MapScreen));
 
 export function App() {
   return (
@@ -20,6 +25,8 @@ export function App() {
         <ErrorBoundary>
           <Router>
             <Route path="/" component={HomeScreen} />
+            <Route path="/survey/:id/:step?" component={SurveyScreen} />
+            <Route path="/map" component={MapScreen} />
             <Route path="/settings" component={SettingsScreen} />
             <Route default component={NotFoundScreen} />
           </Router>
