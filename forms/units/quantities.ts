@@ -20,6 +20,8 @@ export type Quantity =
   | 'angle' // tilt
   | 'percent' // damping and drift ratios, shown in %
   | 'frequency'
+  | 'coordinate' // latitude, longitude in decimal degrees
+  | 'factor' // a plain number such as the soil factor S
   | 'count';
 
 export interface QuantityDef {
@@ -52,6 +54,8 @@ export const QUANTITIES: Readonly<Record<Quantity, QuantityDef>> = {
   angle: { shown: { si: 'deg', us: 'deg' }, accepted: ['deg'] },
   percent: { shown: { si: 'pct', us: 'pct' }, accepted: ['pct'] },
   frequency: { shown: { si: 'Hz', us: 'Hz' }, accepted: ['Hz'] },
+  coordinate: { shown: { si: 'coord', us: 'coord' }, accepted: ['coord'] },
+  factor: { shown: { si: 'factor', us: 'factor' }, accepted: [] },
   count: { shown: { si: 'count', us: 'count' }, accepted: [] },
 };
 

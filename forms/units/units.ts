@@ -42,6 +42,8 @@ export type UnitId =
   | 'deg'
   | 'pct'
   | 'Hz'
+  | 'coord'
+  | 'factor'
   | 'count';
 
 export interface UnitDef {
@@ -86,5 +88,8 @@ export const UNITS: Readonly<Record<UnitId, UnitDef>> = {
   deg: { toSI: Math.PI / 180, decimals: 2, typed: ['°', 'deg', 'degrees'] },
   pct: { toSI: 0.01, decimals: 2, typed: ['%'] },
   Hz: { toSI: 1, decimals: 2, typed: ['hz'] },
+  // Latitude and longitude in decimal degrees: stored as degrees (WGS84), not radians.
+  coord: { toSI: 1, decimals: 5, typed: ['°', 'deg'] },
+  factor: { toSI: 1, decimals: 2, typed: [] },
   count: { toSI: 1, decimals: 0, typed: [] },
 };

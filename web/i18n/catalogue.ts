@@ -5,6 +5,7 @@
 import { app } from './en/app.js';
 import { screens } from './en/screens.js';
 import { posting } from './en/posting.js';
+import { fields } from './en/fields.js';
 
 /**
  * English catalogue. Each area of the app adds its own section file under en/ and spreads it
@@ -14,6 +15,7 @@ export const en = {
   ...app,
   ...screens,
   ...posting,
+  ...fields,
 } as const;
 
 export type MessageKey = keyof typeof en;
