@@ -6,6 +6,7 @@ import { app } from './en/app.js';
 import { screens } from './en/screens.js';
 import { posting } from './en/posting.js';
 import { fields } from './en/fields.js';
+import { map } from './en/map.js';
 
 /**
  * English catalogue. Each area of the app adds its own section file under en/ and spreads it
@@ -16,6 +17,7 @@ export const en = {
   ...screens,
   ...posting,
   ...fields,
+  ...map,
 } as const;
 
 export type MessageKey = keyof typeof en;
