@@ -8,6 +8,38 @@
 /** Machine epsilon of IEEE 754 double precision, 2^-52. */
 const EPS = 2 ** -52;
 
+/**
+ * √(a² + b²) without overflow or underflow: the plain formula when it is safely in range,
+ * else the scaled form (as JAMA's hypot does).
+ */
+function hypot(a: number, b: number): number {
+  const r = Math.sqrt(a * a + b * b);
+  if (r > 1e-150 && r < 1e150) return r;
+  const x = Math.abs(a);
+  const y = Math.abs(b);
+  const m = x > y ? x : y;
+  if (m === 0) return 0;
+  const u = x / m;
+  const v = y / m;
+  return m * Math.sqrt(u * u + v * v);
+}
+
+/** Smallest normal double, 2^-1022: squares below it are round-off (LAPACK's SAFMIN). */
+const SAFMIN = 2 ** -1022;
+
+/**
+ * True when the sub-diagonal entry e[m] is negligible beside its diagonal neighbours:
+ * e² ≤ eps²·|d[m]|·|d[m+1]| + safmin, the splitting test of LAPACK dsteqr (Anderson et al.,
+ * LAPACK Users' Guide, 3rd ed., SIAM 1999), which keeps small eigenvalues of graded matrices
+ * accurate and treats subnormal entries as zero.
+ */
+function negligible(d: Float64Array, e: Float64Array, m: number, shift: number): boolean {
+  // Entries of the active block are held shifted by the accumulated shift: compare with the
+  // unshifted diagonal.
+  const em = e[m]!;
+  return em * em <= EPS * EPS * Math.abs(d[m]! + shift) * Math.abs(d[m + 1]! + shift) + SAFMIN;
+}
+
 /** Iteration cap per eigenvalue; QL converges in 2–3 iterations typically (Wilkinson 1968). */
 const MAX_ITERATIONS = 60;
 
@@ -18,7 +50,7 @@ const MAX_ITERATIONS = 60;
  * any initial content) receives the orthonormal eigenvectors as columns: v[i·n + j] is
  * component i of the eigenvector of d[j].
  *
- * @throws RangeError when the iteration does not converge (only with non-finite input).
+ * @throws RangeError for non-finite entries, or when the iteration does not converge.
  */
 export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: Float64Array): void {
   const n = d.length;
@@ -27,13 +59,24 @@ export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: F
   if (n === 1) return;
   e[n - 1] = 0;
 
+  // Work on the matrix scaled to a largest entry of 1, so no product below can overflow or
+  // sink into subnormals; the eigenvalues are scaled back at the end.
+  let norm = 0;
+  for (let i = 0; i < n; i++) norm = Math.max(norm, Math.abs(d[i]!), Math.abs(e[i]!));
+  if (!Number.isFinite(norm)) {
+    throw new RangeError(`tridiagonal matrix entries must be finite, got largest |entry| ${norm}`);
+  }
+  if (norm === 0) return; // the zero matrix: eigenvalues 0, eigenvectors the unit vectors
+  for (let i = 0; i < n; i++) {
+    d[i] = d[i]! / norm;
+    e[i] = e[i]! / norm;
+  }
+
   let f = 0;
-  let tst1 = 0;
   for (let l = 0; l < n; l++) {
     // Find a negligible sub-diagonal element.
-    tst1 = Math.max(tst1, Math.abs(d[l]!) + Math.abs(e[l]!));
     let m = l;
-    while (m < n - 1 && Math.abs(e[m]!) > EPS * tst1) m++;
+    while (m < n - 1 && !negligible(d, e, m, f)) m++;
 
     if (m > l) {
       let iter = 0;
@@ -44,7 +87,7 @@ export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: F
         // Implicit shift from the leading 2×2 block.
         let g = d[l]!;
         let p = (d[l + 1]! - g) / (2 * e[l]!);
-        let r = Math.sqrt(p * p + 1);
+        let r = hypot(p, 1);
         if (p < 0) r = -r;
         d[l] = e[l]! / (p + r);
         d[l + 1] = e[l]! * (p + r);
@@ -68,7 +111,7 @@ export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: F
           const ei = e[i]!;
           g = c * ei;
           h = c * p;
-          r = Math.sqrt(p * p + ei * ei);
+          r = hypot(p, ei);
           e[i + 1] = s * r;
           s = ei / r;
           c = p / r;
@@ -86,11 +129,13 @@ export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: F
         p = (-s * s2 * c3 * el1 * e[l]!) / dl1;
         e[l] = s * p;
         d[l] = c * p;
-      } while (Math.abs(e[l]!) > EPS * tst1);
+      } while (!negligible(d, e, l, f));
     }
     d[l] = d[l]! + f;
     e[l] = 0;
   }
+
+  for (let i = 0; i < n; i++) d[i] = d[i]! * norm;
 
   // Selection sort into ascending order, swapping eigenvector columns alongside.
   for (let i = 0; i < n - 1; i++) {

@@ -1,0 +1,96 @@
+import type { Direction } from '../survey/survey-input.js';
+import { Findings } from './findings.js';
+import type { WallContribution } from './wall-contribution.js';
+
+/** Lateral stiffness and strength of one storey in one direction. */
+export interface StoreyLateral {
+  storey: number;
+  /** Sum of the shear walls' stiffnesses, in N/m; null when no shear wall values are known. */
+  stiffnessNPerM: number | null;
+  /** Sum of the shear walls' strengths, in N; null when no shear wall values are known. */
+  strengthN: number | null;
+  /** Shear walls counted. */
+  shearWallCount: number;
+  /** Rocking walls in this storey and direction (not counted in the values above). */
+  rockingWallCount: number;
+  /** False when some walls had to be left out for missing values: the sums are then lower bounds. */
+  complete: boolean;
+  /** Distinct sources of the values summed. */
+  sources: string[];
+}
+
+/**
+ * Storey stiffness and strength per storey for one direction: the walls along that direction
+ * act as parallel springs (rigid diaphragm) and all reach their strength together (ductile
+ * nailed walls). A storey without any usable wall along the direction is unknown (null),
+ * not zero: record bare walls as 'unsheathed' to say a storey really has no bracing.
+ */
+export function storeyLateral(
+  storeyCount: number,
+  direction: Direction,
+  walls: readonly WallContribution[],
+  findings: Findings,
+): StoreyLateral[] {
+  const out: StoreyLateral[] = new Array<StoreyLateral>(storeyCount);
+  for (let i = 0; i < storeyCount; i++) {
+    out[i] = {
+      storey: i,
+      stiffnessNPerM: null,
+      strengthN: null,
+      shearWallCount: 0,
+      rockingWallCount: 0,
+      complete: true,
+      sources: [],
+    };
+  }
+  let anyWall = false;
+  for (const w of walls) {
+    if (w.direction !== direction) continue;
+    const s = out[w.storey];
+    if (s === undefined) continue; // invalid storey, already listed
+    if (w.treatment === 'excluded-rocking') {
+      s.rockingWallCount++;
+      anyWall = true;
+    } else if (w.treatment === 'excluded-unknown') {
+      s.complete = false;
+      anyWall = true;
+    } else if (w.treatment === 'shear-wall') {
+      anyWall = true;
+      s.shearWallCount++;
+      s.stiffnessNPerM = (s.stiffnessNPerM ?? 0) + (w.stiffnessNPerM ?? 0);
+      s.strengthN = (s.strengthN ?? 0) + (w.strengthN ?? 0);
+      if (!s.sources.includes(w.source)) s.sources.push(w.source);
+    }
+  }
+  if (!anyWall) {
+    findings.missing(
+      `walls (${direction})`,
+      `no walls along ${direction}: the period along ${direction} is empirical, storey stiffness and strength are unknown`,
+    );
+    return out;
+  }
+  findings.assume(
+    'storey.parallel-walls',
+    'Walls along a direction act in parallel under a rigid diaphragm, and all reach their strength together.',
+    'common practice for rigid-diaphragm storey models (ASCE 7-16 §12.3.1 idealisation)',
+  );
+  for (const s of out) {
+    if (s.shearWallCount === 0) {
+      const why =
+        s.rockingWallCount > 0
+          ? 'has only rocking walls (assessed by the rocking module)'
+          : 'has no usable walls recorded (record bare walls as "unsheathed")';
+      findings.missing(
+        `walls (storey ${s.storey}, ${direction})`,
+        `storey ${s.storey} ${why} along ${direction}: its shear-wall stiffness and strength are unknown`,
+      );
+    } else if (!s.complete) {
+      findings.assume(
+        `storey.partial.${direction}.${s.storey}`,
+        `Storey ${s.storey} along ${direction}: some walls lack values; stiffness and strength are lower bounds.`,
+        'walls with missing values left out (modelling choice)',
+      );
+    }
+  }
+  return out;
+}
