@@ -6,6 +6,7 @@
  * - Answers every app navigation with the cached index.html, so a cold start offline works
  *   on deep links too. Downloads and files are excluded (denylist).
  * - Removes caches left by older Workbox versions.
+ * - Caches the map tiles people view, within a size cap (tile-cache.ts).
  * - Never takes over by itself once a version is running: a new worker waits until the page
  *   asks it to (after the page has flushed its drafts), so a half-filled form is never lost
  *   to a reload nobody asked for.
@@ -20,12 +21,15 @@ import { clientsClaim } from 'workbox-core';
 import type { PrecacheEntry } from 'workbox-precaching';
 import { isSkipWaitingMessage } from './messages.js';
 import { navigationDenylist } from './navigation-denylist.js';
+import { registerTileCache } from './tile-cache.js';
 
 declare const self: ServiceWorkerGlobalScope & {
   __WB_MANIFEST: Array<PrecacheEntry | string>;
 };
 
 cleanupOutdatedCaches();
+// Before Workbox's routes: tiles are cross-origin and never in the precache.
+registerTileCache();
 precacheAndRoute(self.__WB_MANIFEST);
 registerRoute(
   new NavigationRoute(createHandlerBoundToURL('/index.html'), { denylist: navigationDenylist }),
