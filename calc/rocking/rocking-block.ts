@@ -41,7 +41,8 @@ export interface RockingBlock extends RockingOscillator {
  * - p = √(3g/(4R)), from the moment of inertia about a corner I₀ = (4/3)·m·R²;
  * - uplift from rest when |üg| > g·tan α;
  * - r = 1 − 1.5·sin²α, from conservation of angular momentum about the new corner at impact
- *   (so a fraction r² of the kinetic energy survives each impact).
+ *   (so a fraction r² of the kinetic energy survives each impact); taken as 0 for squat
+ *   blocks (b/h ≥ √2) where the formula gives r ≤ 0 and the impact stops the block.
  *
  * @throws RangeError when a dimension is not a finite number > 0.
  */
@@ -55,8 +56,9 @@ export function rockingBlock(widthM: number, heightM: number): RockingBlock {
   // 3/4 from I₀ = (4/3)·m·R² of a rectangle about its corner (Housner 1963).
   const p = Math.sqrt((3 * G) / (4 * R));
   const s = Math.sin(alpha);
-  // 1.5 = 2·m·R²/I₀ (Housner 1963, eq. for the angular velocity ratio at impact).
-  const restitution = 1 - 1.5 * s * s;
+  // 1.5 = 2·m·R²/I₀ (Housner 1963, eq. for the angular velocity ratio at impact). For squat
+  // blocks (b/h ≥ √2) the formula reaches 0 or below: the impact stops the block, so r = 0.
+  const restitution = Math.max(0, 1 - 1.5 * s * s);
   return { widthM, heightM, alpha, R, p, restitution, upliftAccelerationG: Math.tan(alpha) };
 }
 

@@ -458,7 +458,6 @@ export function runRocking(
         tEndOf,
       );
       ends.push({ x, u: s * e.th1, th: e.th1, om: e.om1, acc: e.acc1 });
-      if (Math.abs(e.th1) > out.peakAbsTheta) out.peakAbsTheta = Math.abs(e.th1);
     }
     ends.push({ x: hs, u: u1, th: th1, om: om1, acc: acc1 });
 
@@ -508,6 +507,12 @@ export function runRocking(
       th1 = e.th1;
       om1 = e.om1;
       acc1 = e.acc1;
+    }
+    // The extremum counts (and is recorded) only if the block got there before an event.
+    const mid = ends.length === 3 ? ends[1] : undefined;
+    if (mid !== undefined && (event === 'none' || mid.x < xEvent)) {
+      if (Math.abs(mid.th) > out.peakAbsTheta) out.peakAbsTheta = Math.abs(mid.th);
+      push(t + mid.x, mid.th);
     }
     const tNew = event === 'none' ? t + hs : t + xEvent;
     if (Math.abs(th1) > out.peakAbsTheta) out.peakAbsTheta = Math.abs(th1);

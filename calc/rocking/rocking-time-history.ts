@@ -22,6 +22,8 @@ export interface RockingTimeHistory {
   /** First lift-off, or null when the ground never exceeded the uplift threshold. */
   upliftTimeS: number | null;
   overturnTimeS: number | null;
+  /** State at the end of the run (at the toppling instant if it toppled), to continue from. */
+  final: { t: number; theta: number; thetaDot: number; atRest: boolean };
   /** False only if the step guard stopped the run early (the result then covers less). */
   completed: boolean;
   acceptedSteps: number;
@@ -62,6 +64,7 @@ export function rockingTimeHistory(
     impactTimesS: run.impactTimesS,
     upliftTimeS: run.upliftTimeS,
     overturnTimeS: run.overturnTimeS,
+    final: run.final,
     completed: run.completed,
     acceptedSteps: run.acceptedSteps,
     rejectedSteps: run.rejectedSteps,

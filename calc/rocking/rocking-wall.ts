@@ -143,7 +143,7 @@ export function rockingWall(params: RockingWallParams): RockingWall {
   const alpha = Math.atan2(A, B);
   const p = Math.sqrt(B / (I0 * Math.cos(alpha)));
   // Housner's impact argument: r = 1 − 2·Σm·b²/I₀ (each mass sits b from either corner).
-  const restitution = 1 - (2 * massKg * b * b) / I0;
+  const restitution = Math.max(0, 1 - (2 * massKg * b * b) / I0); // 0: squat walls stop at impact
   const upliftAccelerationG = momentCapacityNm / B;
   return {
     widthM,
