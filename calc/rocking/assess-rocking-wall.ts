@@ -86,6 +86,7 @@ export function spectrumCornerPeriod(spec: SpectrumSpec): number {
     if (sa > maxSa) maxSa = sa;
     if (sa * T > maxSaT) maxSaT = sa * T;
   }
+  // A spectrum of zeros has no corner; 0.5 s (EN 1998-1 Table 3.2, ground B, TC) stands in.
   return maxSa > 0 ? maxSaT / maxSa : 0.5;
 }
 

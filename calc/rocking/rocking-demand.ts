@@ -36,6 +36,7 @@ const START = 0.05;
 const TOLERANCE = 1e-6;
 /** Below this × α the rocking is negligible and the iteration stops (ours). */
 const NEGLIGIBLE = 1e-4;
+/** Iteration limit (ours): convergence is linear, and slow only near a tangency. */
 const MAX_ITERATIONS = 500;
 /**
  * Cap on the equivalent damping ratio (ours): r → 0 gives ξ → ∞, and the spectra's damping

@@ -109,6 +109,10 @@ const MIN_SHRINK = 0.2;
 const REST_VELOCITY = 1e-4;
 /** Time tolerance of event location, s (ours: well below any physical time scale). */
 const EVENT_TIME_TOL = 1e-12;
+/** First step after a lift-off, × 1/p (ours: a hundredth of the block's time scale). */
+const FIRST_STEP = 0.01;
+/** Shortest step, relative to t, before the run is given up (ours: near double precision). */
+const MIN_STEP = 1e-14;
 
 class Engine {
   readonly alpha: number;
@@ -327,7 +331,7 @@ export function runRocking(
   out.peakAbsTheta = Math.abs(theta0);
   push(0, th);
   let bi = 0; // index of the next breakpoint ≥ t
-  let h = Math.min(hMax, 0.01 / block.p, endS);
+  let h = Math.min(hMax, FIRST_STEP / block.p, endS);
   let a0 = atRest ? 0 : e.accel(t, th);
   let attempts = 0;
   let restFrom = 0;
@@ -374,7 +378,7 @@ export function runRocking(
       lifted = true;
       a0 = e.accel(t, th);
       push(t, th);
-      h = Math.min(hMax, 0.01 / block.p);
+      h = Math.min(hMax, FIRST_STEP / block.p);
       continue;
     }
 
@@ -402,7 +406,7 @@ export function runRocking(
       out.rejectedSteps++;
       const f = Number.isFinite(err) ? Math.max(MIN_SHRINK, SAFETY * err ** -0.2) : MIN_SHRINK;
       h = hs * Math.min(1, f);
-      if (h < 1e-14 * Math.max(1, t)) {
+      if (h < MIN_STEP * Math.max(1, t)) {
         out.completed = false;
         break;
       }
@@ -427,11 +431,11 @@ export function runRocking(
     if (u0 === 0 && v0 === 0 && u1 < 0) {
       out.acceptedSteps--;
       out.rejectedSteps++;
-      if (hs < 1e-12) {
+      if (hs < 1e3 * EVENT_TIME_TOL) {
         // The excursion is below any resolution: the block stays down. Resume the scan just
         // after this instant so the same sample does not lift it again.
         atRest = true;
-        restFrom = t + 1e-9;
+        restFrom = t + 1e3 * EVENT_TIME_TOL;
         continue;
       }
       h = hs / 8;
