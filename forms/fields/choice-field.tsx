@@ -21,6 +21,8 @@ export interface ChoiceFieldProps<T extends string> {
   onChoose: (value: T) => void;
   unconfirmed?: boolean | undefined;
   onConfirm?: (() => void) | undefined;
+  /** Show only a short "not confirmed" mark (the confirm button is elsewhere). */
+  compactUnconfirmed?: boolean | undefined;
   /** 'row' puts short options side by side (two or three words each). */
   layout?: 'row' | 'column';
   hint?: string | undefined;
@@ -59,7 +61,14 @@ export function ChoiceField<T extends string>(p: ChoiceFieldProps<T>) {
           </label>
         ))}
       </div>
-      {p.unconfirmed && <UnconfirmedNote id={id} label={p.legend} onConfirm={p.onConfirm} />}
+      {p.unconfirmed && (
+        <UnconfirmedNote
+          id={id}
+          label={p.legend}
+          onConfirm={p.onConfirm}
+          compact={p.compactUnconfirmed}
+        />
+      )}
     </fieldset>
   );
 }

@@ -5,6 +5,6 @@
  */
 export type FieldChange =
   /** The text is a valid value (or, for an optional field, empty: `null`). */
-  | { path: string; kind: 'value'; value: unknown }
+  | { path: string; kind: 'value'; value: unknown; text: string }
   /** The text is not a valid value yet: keep it as typed, leave the stored value alone. */
   | { path: string; kind: 'pending'; text: string };

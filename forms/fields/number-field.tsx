@@ -32,8 +32,15 @@ export interface NumberFieldProps {
   unconfirmedReason?: string | undefined;
   onChange: (change: FieldChange) => void;
   onConfirm?: (() => void) | undefined;
-  /** Label text instead of the spec's (e.g. "Storey 2 height"). */
+  /** Show only a short "not confirmed" mark (the confirm button is elsewhere). */
+  compactUnconfirmed?: boolean | undefined;
+  /** Label text instead of the spec's. */
   label?: string | undefined;
+  /**
+   * Words that make the label unique on the page ("Storey 2:"), read by screen readers but
+   * not shown, because the card around the field already says it.
+   */
+  labelPrefix?: string | undefined;
   hint?: string | undefined;
   /** Extra error from elsewhere (e.g. a record-level check at this path). */
   error?: string | null | undefined;
@@ -73,6 +80,7 @@ export function NumberField(p: NumberFieldProps) {
 
   const check = checkNumber(text.current, p.spec, p.system);
   const label = p.label ?? t(p.spec.label);
+  const fullLabel = p.labelPrefix ? `${p.labelPrefix} ${label}` : label;
   const u = unitSymbol(shownUnit(p.spec.quantity, p.system));
   const error = check.state === 'invalid' ? check.message : (p.error ?? null);
   const warning = check.state === 'valid' ? check.warning : null;
@@ -85,9 +93,9 @@ export function NumberField(p: NumberFieldProps) {
     const c = checkNumber(typed, p.spec, p.system);
     const change: FieldChange =
       c.state === 'valid'
-        ? { path: p.path, kind: 'value', value: c.valueSI }
+        ? { path: p.path, kind: 'value', value: c.valueSI, text: typed }
         : c.state === 'empty'
-          ? { path: p.path, kind: 'value', value: null }
+          ? { path: p.path, kind: 'value', value: null, text: typed }
           : { path: p.path, kind: 'pending', text: typed };
     const k =
       change.kind === 'pending'
@@ -106,8 +114,9 @@ export function NumberField(p: NumberFieldProps) {
   return (
     <div class={classes.join(' ')}>
       <label for={id} class="field__label">
+        {p.labelPrefix && <span class="visually-hidden">{p.labelPrefix} </span>}
         {label}
-        {u && <span class="field__unit"> ({u})</span>}
+        {u && <span class="visually-hidden"> ({u})</span>}
       </label>
       <div class="field__control">
         <input
@@ -120,6 +129,7 @@ export function NumberField(p: NumberFieldProps) {
           spellcheck={false}
           enterKeyHint="next"
           value={text.current}
+          style={u ? { paddingRight: `${0.9 + 0.62 * u.length}em` } : undefined}
           placeholder={p.placeholder}
           aria-invalid={error ? 'true' : undefined}
           aria-describedby={describedBy({ id, error, warning, note, hint: p.hint })}
@@ -135,8 +145,9 @@ export function NumberField(p: NumberFieldProps) {
       {p.unconfirmed && (
         <UnconfirmedNote
           id={id}
-          label={label}
+          label={fullLabel}
           reason={p.unconfirmedReason}
+          compact={p.compactUnconfirmed}
           onConfirm={check.state === 'valid' ? p.onConfirm : undefined}
         />
       )}

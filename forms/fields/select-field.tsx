@@ -11,7 +11,11 @@ export interface SelectFieldProps<T extends string> {
   onChoose: (value: T) => void;
   unconfirmed?: boolean | undefined;
   onConfirm?: (() => void) | undefined;
+  /** Show only a short "not confirmed" mark (the confirm button is elsewhere). */
+  compactUnconfirmed?: boolean | undefined;
   hint?: string | undefined;
+  /** Visually hidden words that make the label unique ("Storey 2:"). */
+  labelPrefix?: string | undefined;
   /** Shown as the first, unselectable option when value is null. */
   placeholder?: string | undefined;
 }
@@ -21,6 +25,7 @@ export function SelectField<T extends string>(p: SelectFieldProps<T>) {
   return (
     <div class={p.unconfirmed ? 'field field--unconfirmed' : 'field'}>
       <label for={id} class="field__label">
+        {p.labelPrefix && <span class="visually-hidden">{p.labelPrefix} </span>}
         {p.label}
       </label>
       {p.hint && (
@@ -49,7 +54,14 @@ export function SelectField<T extends string>(p: SelectFieldProps<T>) {
           </option>
         ))}
       </select>
-      {p.unconfirmed && <UnconfirmedNote id={id} label={p.label} onConfirm={p.onConfirm} />}
+      {p.unconfirmed && (
+        <UnconfirmedNote
+          id={id}
+          label={p.label}
+          onConfirm={p.onConfirm}
+          compact={p.compactUnconfirmed}
+        />
+      )}
     </div>
   );
 }

@@ -19,6 +19,8 @@ export interface TextFieldProps {
   hint?: string | undefined;
   autocomplete?: string | undefined;
   placeholder?: string | undefined;
+  /** Visually hidden words that make the label unique ("Photo 2:"). */
+  labelPrefix?: string | undefined;
 }
 
 export function TextField(p: TextFieldProps) {
@@ -48,7 +50,7 @@ export function TextField(p: TextFieldProps) {
     p.onChange(
       typed.length > p.maxLength
         ? { path: p.path, kind: 'pending', text: typed }
-        : { path: p.path, kind: 'value', value: typed },
+        : { path: p.path, kind: 'value', value: typed, text: typed },
     );
   };
   const common = {
@@ -62,6 +64,7 @@ export function TextField(p: TextFieldProps) {
   return (
     <div class={error ? 'field field--error' : 'field'}>
       <label for={id} class="field__label">
+        {p.labelPrefix && <span class="visually-hidden">{p.labelPrefix} </span>}
         {p.label}
       </label>
       {p.multiline ? (

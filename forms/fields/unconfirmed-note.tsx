@@ -10,7 +10,17 @@ export function UnconfirmedNote(props: {
   label: string;
   onConfirm?: (() => void) | undefined;
   reason?: string | undefined;
+  /** Only a short mark; the confirm action lives elsewhere (e.g. "Confirm all storeys"). */
+  compact?: boolean | undefined;
 }) {
+  if (props.compact) {
+    return (
+      <p class="unconfirmed-mark" id={`${props.id}-unconfirmed`}>
+        <span aria-hidden="true">◌ </span>
+        {t('field.unconfirmedShort')}
+      </p>
+    );
+  }
   return (
     <div class="unconfirmed" id={`${props.id}-unconfirmed`}>
       <p class="unconfirmed__text">

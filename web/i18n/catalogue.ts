@@ -6,6 +6,7 @@ import { app } from './en/app.js';
 import { screens } from './en/screens.js';
 import { posting } from './en/posting.js';
 import { fields } from './en/fields.js';
+import { result } from './en/result.js';
 import { map } from './en/map.js';
 
 /**
@@ -17,6 +18,7 @@ export const en = {
   ...screens,
   ...posting,
   ...fields,
+  ...result,
   ...map,
 } as const;
 

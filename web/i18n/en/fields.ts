@@ -54,6 +54,7 @@ export const fields = {
   'field.copiedBelow': 'Copied from the storey below. Check it, then confirm or change it.',
   'field.teamHazard':
     'Filled in from the team’s hazard of the day. Check it, then confirm or change it.',
+  'field.unconfirmedShort': 'Filled in by the app, not confirmed yet.',
   'field.confirm': 'Confirm',
   'field.confirmLabel': 'Confirm {label}',
 
@@ -102,7 +103,7 @@ export const fields = {
   'field.upliftGap': 'Uplift gap',
   'field.driftMethod': 'How it was measured',
   'field.driftOffset': 'Offset',
-  'field.driftOverHeight': 'Over a height of',
+  'field.driftOverHeight': 'Height measured over',
   'field.driftTilt': 'Tilt',
   'field.notes': 'Notes',
   'field.photoCaption': 'Caption',

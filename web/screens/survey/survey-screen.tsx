@@ -1,10 +1,127 @@
-/** One survey, step by step. (Placeholder until the field-forms issue lands.) */
+/**
+ * One survey, step by step: Place, Building, Walls, Observations, Hazard, then the verdict.
+ * Each step has its own address, so the step bar, a reload or a shared link opens it
+ * directly. Every change goes to the draft saver at once (stored within 300 ms); the save
+ * indicator says "Saved" only when the write has completed.
+ */
+import { useEffect, useMemo, useRef } from 'preact/hooks';
+import '../../styles/screens.css';
+import { useSurveyDraft } from '../../storage/index.js';
 import { t } from '../../i18n/index.js';
+import { paths } from '../../app/routes.js';
+import { useUnits } from '../settings/preferences.js';
+import { BuildingStep } from './building-step.js';
+import { HazardStep } from './hazard-step.js';
+import { IssueSummary } from './issue-summary.js';
+import { ObservationsStep } from './observations-step.js';
+import { PlaceStep } from './place-step.js';
+import { SaveIndicator } from './save-indicator.js';
+import { StepBar } from './step-bar.js';
+import type { StepContext } from './step-context.js';
+import { stepIssues } from './step-issues.js';
+import { STEPS, stepFromParam, stepLabels, type StepId } from './steps.js';
+import { WallsStep } from './walls-step.js';
+import { DraftNotices } from './draft-notices.js';
 
-export function SurveyScreen(_props: { params: { id?: string; step?: string } }) {
+const STEP_COMPONENTS: Record<StepId, (p: { ctx: StepContext }) => preact.JSX.Element> = {
+  place: PlaceStep,
+  building: BuildingStep,
+  walls: WallsStep,
+  observations: ObservationsStep,
+  hazard: HazardStep,
+};
+
+export function SurveyScreen(props: { params: { id?: string; step?: string } }) {
+  const id = props.params.id ?? '';
+  const step = stepFromParam(props.params.step);
+  const draft = useSurveyDraft(id);
+  const system = useUnits();
+  const heading = useRef<HTMLHeadingElement>(null);
+  const record = draft.record;
+  const issues = useMemo(() => (record ? stepIssues(record, system) : null), [record, system]);
+
+  // A new step starts at its heading: scrolled to the top, focus there for the keyboard.
+  const firstRender = useRef(true);
+  useEffect(() => {
+    if (firstRender.current) {
+      firstRender.current = false;
+      return;
+    }
+    window.scrollTo(0, 0);
+    heading.current?.focus({ preventScroll: true });
+  }, [step]);
+
+  if (draft.loading) {
+    return (
+      <main class="screen" id="main">
+        <h1>{t('loading')}</h1>
+      </main>
+    );
+  }
+  if (!record || !issues) {
+    return (
+      <main class="screen" id="main">
+        <h1>{t('survey.notFoundTitle')}</h1>
+        <p>{draft.error?.message ?? t('survey.notFound')}</p>
+        <p>
+          <a class="button button--primary" href={paths.home}>
+            {t('notFound.home')}
+          </a>
+        </p>
+      </main>
+    );
+  }
+
+  const ctx: StepContext = { record, edit: (fn) => draft.update(fn), system };
+  const index = STEPS.indexOf(step);
+  const prev = STEPS[index - 1];
+  const next = STEPS[index + 1];
+  const Step = STEP_COMPONENTS[step];
+  const stepName = t(stepLabels[step]);
+
   return (
-    <main class="screen" id="main">
-      <h1>{t('nav.newSurvey')}</h1>
+    <main class="screen survey" id="main">
+      <div class="survey__top">
+        <p class="survey__address">
+          {record.address.trim() === '' ? t('survey.untitled') : record.address}
+        </p>
+        <SaveIndicator
+          state={draft.saveState}
+          error={draft.error?.message ?? null}
+          onRetry={() => void draft.retry()}
+        />
+      </div>
+      <DraftNotices draft={draft} />
+      <StepBar id={record.id} current={step} issues={issues} />
+      <h1 ref={heading} tabIndex={-1} class="survey__heading">
+        <span class="survey__kicker">
+          {t('survey.stepOf', { n: index + 1, total: STEPS.length })}
+        </span>
+        {stepName}
+      </h1>
+      <IssueSummary issues={issues[step]} stepName={stepName} />
+      <Step ctx={ctx} />
+      <nav class="step-nav" aria-label={t('steps.prevNext')}>
+        {prev ? (
+          <a class="button" href={paths.survey(record.id, prev)}>
+            <span aria-hidden="true">← </span>
+            {t(stepLabels[prev])}
+          </a>
+        ) : (
+          <span />
+        )}
+        {next ? (
+          <a class="button button--primary" href={paths.survey(record.id, next)}>
+            {t('steps.next', { step: t(stepLabels[next]) })}
+            <span aria-hidden="true"> →</span>
+          </a>
+        ) : (
+          <a class="button button--primary" href={paths.result(record.id)}>
+            {t('steps.toResult')}
+            <span aria-hidden="true"> →</span>
+          </a>
+        )}
+      </nav>
     </main>
   );
 }
