@@ -15,3 +15,15 @@ export function damageStateRank(state: DamageState): number {
 export function worseDamageState(a: DamageState, b: DamageState): DamageState {
   return damageStateRank(a) >= damageStateRank(b) ? a : b;
 }
+
+/** The most severe of a list of states ('none' for an empty list). */
+export function worstDamageState(states: Iterable<DamageState | null>): DamageState {
+  let worst: DamageState = 'none';
+  for (const s of states) if (s !== null && damageStateRank(s) > damageStateRank(worst)) worst = s;
+  return worst;
+}
+
+/** True when `value` is one of the damage-state ids. */
+export function isDamageState(value: unknown): value is DamageState {
+  return typeof value === 'string' && (DAMAGE_STATES as readonly string[]).includes(value);
+}
