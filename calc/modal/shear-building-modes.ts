@@ -109,10 +109,10 @@ export function shearBuildingModes(
   for (let j = 0; j < n; j++) {
     // Ascending ω² is descending period: mode j is column j.
     const omega = Math.sqrt(d[j]! * scale);
-    let roof = v[(n - 1) * n + j]! * invSqrtM[n - 1]!;
+    let roof = v[j * n + n - 1]! * invSqrtM[n - 1]!;
     let peak = 0;
     for (let i = 0; i < n; i++) {
-      const x = v[i * n + j]! * invSqrtM[i]!;
+      const x = v[j * n + i]! * invSqrtM[i]!;
       if (Math.abs(x) > Math.abs(peak)) peak = x;
     }
     // Below 1e-9 of the peak the roof value is round-off: normalise to the peak instead.
@@ -122,33 +122,29 @@ export function shearBuildingModes(
     const shape: number[] = new Array<number>(n);
     let mPhi = 0;
     let mPhi2 = 0;
+    let finite = true;
     for (let i = 0; i < n; i++) {
-      const phi = (v[i * n + j]! * invSqrtM[i]!) / roof;
+      const phi = (v[j * n + i]! * invSqrtM[i]!) / roof;
       shape[i] = phi;
+      if (!Number.isFinite(phi)) finite = false;
       const mp = masses[i]! * phi;
       mPhi += mp;
       mPhi2 += mp * phi;
     }
     const gamma = mPhi / mPhi2;
-    circularFrequencies[j] = omega;
-    frequencies[j] = omega / (2 * Math.PI);
-    periods[j] = (2 * Math.PI) / omega;
-    shapes[j] = shape;
-    participationFactors[j] = gamma;
-    effectiveMassRatios[j] = (gamma * mPhi) / totalMass;
-  }
-  for (let j = 0; j < n; j++) {
+    const period = (2 * Math.PI) / omega;
     // ω² ≤ 0 or overflow only arise from values at the edge of double range.
-    if (
-      !(periods[j]! > 0) ||
-      !Number.isFinite(periods[j]!) ||
-      !Number.isFinite(participationFactors[j]!) ||
-      !shapes[j]!.every(Number.isFinite)
-    ) {
+    if (!finite || !(period > 0) || !Number.isFinite(period) || !Number.isFinite(gamma)) {
       throw new RangeError(
         `masses and stiffnesses span too wide a range for double precision (mode ${j + 1} is not finite)`,
       );
     }
+    circularFrequencies[j] = omega;
+    frequencies[j] = omega / (2 * Math.PI);
+    periods[j] = period;
+    shapes[j] = shape;
+    participationFactors[j] = gamma;
+    effectiveMassRatios[j] = (gamma * mPhi) / totalMass;
   }
   return {
     periods,

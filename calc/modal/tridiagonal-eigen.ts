@@ -46,9 +46,9 @@ const MAX_ITERATIONS = 60;
 /**
  * Diagonalises the symmetric tridiagonal matrix with diagonal `d` (length n) and
  * sub-diagonal `e` (e[i] = A[i+1][i], length ≥ n−1; e[n−1] is ignored). Both arrays are
- * overwritten: `d` receives the eigenvalues in ascending order, and `v` (n×n, row-major,
- * any initial content) receives the orthonormal eigenvectors as columns: v[i·n + j] is
- * component i of the eigenvector of d[j].
+ * overwritten: `d` receives the eigenvalues in ascending order, and `v` (length n², any
+ * initial content) receives the orthonormal eigenvectors, each stored contiguously:
+ * v[j·n + i] is component i of the eigenvector of d[j].
  *
  * @throws RangeError for non-finite entries, or when the iteration does not converge.
  */
@@ -117,13 +117,14 @@ export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: F
           c = p / r;
           p = c * d[i]! - s * g;
           d[i + 1] = h + s * (c * g + s * d[i]!);
-          // Accumulate the rotation into the eigenvectors (columns i and i+1).
+          // Accumulate the rotation into eigenvectors i and i+1 (contiguous rows of v).
+          const a = i * n;
+          const b = a + n;
           for (let k = 0; k < n; k++) {
-            const row = k * n;
-            const hk = v[row + i + 1]!;
-            const vk = v[row + i]!;
-            v[row + i + 1] = s * vk + c * hk;
-            v[row + i] = c * vk - s * hk;
+            const hk = v[b + k]!;
+            const vk = v[a + k]!;
+            v[b + k] = s * vk + c * hk;
+            v[a + k] = c * vk - s * hk;
           }
         }
         p = (-s * s2 * c3 * el1 * e[l]!) / dl1;
@@ -150,11 +151,12 @@ export function symmetricTridiagonalEigen(d: Float64Array, e: Float64Array, v: F
     if (k !== i) {
       d[k] = d[i]!;
       d[i] = p;
+      const a = i * n;
+      const b = k * n;
       for (let j = 0; j < n; j++) {
-        const row = j * n;
-        const t = v[row + i]!;
-        v[row + i] = v[row + k]!;
-        v[row + k] = t;
+        const t = v[a + j]!;
+        v[a + j] = v[b + j]!;
+        v[b + j] = t;
       }
     }
   }

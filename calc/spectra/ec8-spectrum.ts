@@ -1,5 +1,6 @@
 import { requireNonNegative, requirePositive } from './checks.js';
 import { dampingCorrection, specDamping } from './damping-correction.js';
+import { resolvedSpectralAcceleration, type ResolvedSpectrum } from './resolved-spectrum.js';
 import type { Ec8Ground, Ec8Spectrum } from './spectrum-spec.js';
 
 /** Soil factor and corner periods (s) of an EN 1998-1 elastic spectrum. */
@@ -59,19 +60,32 @@ export function ec8Parameters(spec: Ec8Spectrum): Ec8Parameters {
 }
 
 /**
- * EN 1998-1:2004 §3.2.2.2 horizontal elastic response spectrum Se(T), in g, eqs. (3.2)–(3.5),
- * with η from eq. (3.6). The standard defines it up to 4 s; beyond 4 s the 1/T² branch is
- * continued (constant spectral displacement), which §3.2.2.4 and Annex A do for longer
- * periods when TE, TF are not set.
+ * The EN 1998-1 spectrum resolved for evaluation: ramp from ag·S at T = 0 to the plateau
+ * 2.5·ag·S·η at TB (eq. 3.2), plateau to TC (eq. 3.3), 1/T to TD (eq. 3.4), 1/T² beyond
+ * (eq. 3.5). 2.5 is the plateau amplification of eqs. (3.2)–(3.5).
  */
-export function ec8SpectralAcceleration(spec: Ec8Spectrum, T: number): number {
+export function resolveEc8(spec: Ec8Spectrum): ResolvedSpectrum {
   const { S, TB, TC, TD } = ec8Parameters(spec);
   const ag = requireNonNegative('spec.ag', spec.ag);
-  const eta = dampingCorrection(specDamping(spec.damping));
-  // 2.5 is the spectral amplification of the plateau, EN 1998-1 eqs. (3.2)–(3.5).
-  const plateau = 2.5 * ag * S * eta;
-  if (T <= TB) return ag * S * (1 + (T / TB) * (2.5 * eta - 1)); // eq. (3.2)
-  if (T <= TC) return plateau; // eq. (3.3)
-  if (T <= TD) return (plateau * TC) / T; // eq. (3.4)
-  return (plateau * TC * TD) / (T * T); // eq. (3.5)
+  const dampingRatio = specDamping(spec.damping);
+  const eta = dampingCorrection(dampingRatio);
+  return {
+    atZeroG: ag * S,
+    plateauG: 2.5 * ag * S * eta,
+    rampEndS: TB,
+    plateauEndS: TC,
+    velocityEndS: TD,
+    dampingRatio,
+    eta,
+  };
+}
+
+/**
+ * EN 1998-1:2004 §3.2.2.2 horizontal elastic response spectrum Se(T), in g, eqs. (3.2)–(3.5),
+ * with η from eq. (3.6). The standard defines it up to 4 s; beyond 4 s the 1/T² branch
+ * (constant spectral displacement) is simply continued — EN 1998-1 Annex A, which treats
+ * longer periods, is not modelled.
+ */
+export function ec8SpectralAcceleration(spec: Ec8Spectrum, T: number): number {
+  return resolvedSpectralAcceleration(resolveEc8(spec), T);
 }

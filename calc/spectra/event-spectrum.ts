@@ -1,5 +1,6 @@
 import { requireNonNegative } from './checks.js';
 import { dampingCorrection, specDamping } from './damping-correction.js';
+import { resolvedSpectralAcceleration, type ResolvedSpectrum } from './resolved-spectrum.js';
 import type { EventSpectrum } from './spectrum-spec.js';
 
 /** The shape parameters an event spectrum is built from, in g and s. */
@@ -42,15 +43,26 @@ export function eventShape(spec: EventSpectrum): EventShape {
 }
 
 /**
- * Sa(T) in g of the single-event spectrum described at {@link eventShape}. Damping other
+ * The single-event spectrum of {@link eventShape} resolved for evaluation. Damping other
  * than 5 % scales every ordinate but T = 0 by η = max(0.55, √(10/(5+ξ%))), EN 1998-1:2004
  * eq. (3.6), applied as EN 1998-1 does (a common-practice extension for this shape).
  */
+export function resolveEvent(spec: EventSpectrum): ResolvedSpectrum {
+  const { pga, plateau, T0, TS } = eventShape(spec);
+  const dampingRatio = specDamping(spec.damping);
+  const eta = dampingCorrection(dampingRatio);
+  return {
+    atZeroG: pga,
+    plateauG: eta * plateau,
+    rampEndS: T0,
+    plateauEndS: TS, // plateau·TS = Sa(1.0 s)·1 s: the 1/T branch through the map value
+    velocityEndS: Infinity, // a shaking map gives no long-period corner
+    dampingRatio,
+    eta,
+  };
+}
+
+/** Sa(T) in g of the single-event spectrum described at {@link eventShape}. */
 export function eventSpectralAcceleration(spec: EventSpectrum, T: number): number {
-  const { pga, plateau, sa1, T0, TS } = eventShape(spec);
-  const eta = dampingCorrection(specDamping(spec.damping));
-  if (T === 0) return pga; // also when a zero Sa(1.0) makes T0 = 0
-  if (T < T0) return pga + ((eta * plateau - pga) * T) / T0;
-  if (T <= TS) return eta * plateau;
-  return (eta * sa1) / T;
+  return resolvedSpectralAcceleration(resolveEvent(spec), T);
 }

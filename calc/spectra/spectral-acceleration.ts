@@ -1,8 +1,9 @@
 import { G } from '../units/gravity.js';
-import { asce7SpectralAcceleration } from './asce7-spectrum.js';
+import { resolveAsce7 } from './asce7-spectrum.js';
 import { requireNonNegative } from './checks.js';
-import { ec8SpectralAcceleration } from './ec8-spectrum.js';
-import { eventSpectralAcceleration } from './event-spectrum.js';
+import { resolveEc8 } from './ec8-spectrum.js';
+import { resolveEvent } from './event-spectrum.js';
+import { resolvedSpectralAcceleration, type ResolvedSpectrum } from './resolved-spectrum.js';
 import type { SpectrumSpec } from './spectrum-spec.js';
 
 /**
@@ -19,13 +20,24 @@ import type { SpectrumSpec } from './spectrum-spec.js';
  */
 export function spectralAcceleration(spec: SpectrumSpec, T: number): number {
   requireNonNegative('T', T);
+  return resolvedSpectralAcceleration(resolveSpectrum(spec), T);
+}
+
+/**
+ * Checks a spec and works out its corner periods, plateau and damping factor once, for
+ * evaluating many periods with {@link resolvedSpectralAcceleration} (same values as
+ * {@link spectralAcceleration}).
+ *
+ * @throws RangeError naming the bad value when a spec field is out of range.
+ */
+export function resolveSpectrum(spec: SpectrumSpec): ResolvedSpectrum {
   switch (spec.kind) {
     case 'ec8':
-      return ec8SpectralAcceleration(spec, T);
+      return resolveEc8(spec);
     case 'asce7':
-      return asce7SpectralAcceleration(spec, T);
+      return resolveAsce7(spec);
     case 'event':
-      return eventSpectralAcceleration(spec, T);
+      return resolveEvent(spec);
     default: {
       const never: never = spec;
       throw new RangeError(

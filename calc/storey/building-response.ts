@@ -3,11 +3,12 @@ import { shearBuildingModes, type ShearBuildingModes } from '../modal/shear-buil
 import { empiricalPeriod, empiricalPeriodRange } from '../period/empirical-period.js';
 import { upperLimitCoefficient } from '../period/upper-limit-coefficient.js';
 import { REFERENCE_DAMPING } from '../spectra/damping-correction.js';
-import { spectralAcceleration } from '../spectra/spectral-acceleration.js';
+import type { ResolvedSpectrum } from '../spectra/resolved-spectrum.js';
+import { resolveSpectrum } from '../spectra/spectral-acceleration.js';
 import type { SpectrumSpec } from '../spectra/spectrum-spec.js';
 import type { Direction, SurveyInput, WallInput } from '../survey/survey-input.js';
 import { Findings, type Assumption, type MissingInput } from './findings.js';
-import { plausible, PLAUSIBLE, rangeText } from './plausible-ranges.js';
+import { PLAUSIBLE as PLAUSIBLE_RANGES, plausible, rangeText } from './plausible-ranges.js';
 import type { PeriodEstimate } from './period-estimate.js';
 import { elfDemand, modalDemand, type SeismicDemand } from './seismic-demand.js';
 import { storeyIrregularities, type StoreyIrregularity } from './storey-irregularity.js';
@@ -15,6 +16,9 @@ import { storeyLateral, type StoreyLateral } from './storey-lateral.js';
 import { storeyMasses, type StoreyMass } from './storey-masses.js';
 import { torsionalEccentricity } from './torsional-eccentricity.js';
 import { wallContribution, type WallContribution } from './wall-contribution.js';
+
+/** Module-local alias: read once, not through an import binding in hot loops. */
+const PLAUSIBLE = PLAUSIBLE_RANGES;
 
 /** The storey model and its response in one plan direction. */
 export interface DirectionResponse {
@@ -66,7 +70,11 @@ export interface BuildingResponse {
   missingInputs: MissingInput[];
 }
 
-function checkHazard(hazard: SpectrumSpec | null, findings: Findings): SpectrumSpec | null {
+/** The hazard checked and resolved once, or null (listed) when absent or unusable. */
+function checkHazard(
+  hazard: SpectrumSpec | null,
+  findings: Findings,
+): { spec: SpectrumSpec; spectrum: ResolvedSpectrum } | null {
   if (hazard === null || hazard === undefined) {
     findings.missing(
       'hazard',
@@ -85,8 +93,7 @@ function checkHazard(hazard: SpectrumSpec | null, findings: Findings): SpectrumS
     }
   }
   try {
-    spectralAcceleration(hazard, 0); // validates every field of the spec
-    return hazard;
+    return { spec: hazard, spectrum: resolveSpectrum(hazard) }; // validates every field
   } catch (e) {
     findings.invalid('hazard', `${(e as Error).message}; demand is not computed`);
     return null;
@@ -96,7 +103,11 @@ function checkHazard(hazard: SpectrumSpec | null, findings: Findings): SpectrumS
 interface Shared {
   survey: SurveyInput;
   hazard: SpectrumSpec | null;
-  damping: number;
+  spectrum: ResolvedSpectrum | null;
+  /** Empirical periods (s) by both methods, and the range warnings of the one in use. */
+  ec8S: number | null;
+  asce7S: number | null;
+  rangeWarnings: string[];
   masses: StoreyMass[];
   massValues: number[] | null;
   heights: (number | null)[];
@@ -112,22 +123,33 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
   const { findings } = s;
   const n = s.masses.length;
   const storeys = storeyLateral(n, direction, s.contributions, findings);
-  const walls = s.contributions.filter((c) => c.direction === direction);
-  const stiffness = storeys.map((st) => st.stiffnessNPerM);
-  const strength = storeys.map((st) => st.strengthN);
+  const walls: WallContribution[] = [];
+  let hasWalls = false;
+  for (const c of s.contributions) {
+    if (c.direction !== direction) continue;
+    walls.push(c);
+    if (c.treatment === 'shear-wall') hasWalls = true;
+  }
+  const stiffness: (number | null)[] = new Array<number | null>(n);
+  const strength: (number | null)[] = new Array<number | null>(n);
+  let zero = -1; // first storey without stiffness > 0
+  for (let i = 0; i < n; i++) {
+    const k = storeys[i]!.stiffnessNPerM;
+    stiffness[i] = k;
+    strength[i] = storeys[i]!.strengthN;
+    if (zero === -1 && !(k !== null && k > 0)) zero = i;
+  }
 
   // Modal model: needs every storey's mass and stiffness > 0.
   let modes: ShearBuildingModes | null = null;
-  const hasWalls = walls.some((w) => w.treatment === 'shear-wall');
   if (hasWalls && s.massValues !== null && n > 0) {
-    const zero = stiffness.findIndex((k) => k === null || !(k > 0));
     if (zero === -1) {
       try {
         modes = shearBuildingModes(s.massValues, stiffness as number[]);
-        if (!plausible(modes.periods[0], 'modelPeriodS')) {
+        if (!plausible(modes.periods[0], PLAUSIBLE.modelPeriodS)) {
           findings.invalid(
             `walls (${direction})`,
-            `the storey model's first period ${modes.periods[0]} s is not ${rangeText('modelPeriodS')} s: wall or mass values are in error; no modal model along ${direction}`,
+            `the storey model's first period ${modes.periods[0]} s is not ${rangeText(PLAUSIBLE.modelPeriodS)} s: wall or mass values are in error; no modal model along ${direction}`,
           );
           modes = null;
         }
@@ -146,14 +168,9 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
   // Period estimates.
   const hazard = s.hazard;
   const method = hazard !== null && hazard.kind === 'ec8' ? 'ec8' : 'asce7';
-  const warnings: string[] = [];
-  let ec8: number | null = null;
-  let asce7: number | null = null;
-  if (s.totalHeightM !== null) {
-    ec8 = empiricalPeriod(s.totalHeightM, 'ec8');
-    asce7 = empiricalPeriod(s.totalHeightM, 'asce7');
-    warnings.push(...empiricalPeriodRange(s.totalHeightM, method));
-  }
+  const warnings: string[] = s.rangeWarnings.slice();
+  const ec8 = s.ec8S;
+  const asce7 = s.asce7S;
   const empiricalS = method === 'ec8' ? ec8 : asce7;
   let upperLimitS: number | null = null;
   if (hazard !== null && hazard.kind === 'asce7' && asce7 !== null) {
@@ -209,11 +226,12 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
 
   // Demand.
   let demand: SeismicDemand | null = null;
-  if (hazard !== null && s.massValues !== null && usedS !== null) {
+  const spectrum = s.spectrum;
+  if (spectrum !== null && s.massValues !== null && usedS !== null) {
     if (modes !== null) {
-      demand = modalDemand(hazard, s.damping, modes, s.massValues, s.heights);
+      demand = modalDemand(spectrum, modes, s.massValues, s.heights);
     } else if (s.allHeights !== null) {
-      demand = elfDemand(hazard, s.damping, usedS, s.massValues, s.allHeights);
+      demand = elfDemand(spectrum, usedS, s.massValues, s.allHeights);
       findings.assume(
         'demand.elf',
         'Without a complete wall model, demand is by equivalent lateral forces (ASCE 7-16 §12.8.3 distribution) with a mode shape linear in height for displacements.',
@@ -239,20 +257,25 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
         planField,
         `plan dimension unknown: torsional eccentricity along ${direction} not computed`,
       );
-    } else if (!plausible(plan, 'planM')) {
+    } else if (!plausible(plan, PLAUSIBLE.planM)) {
       findings.invalid(
         planField,
-        `plan dimension ${String(plan)} m is not a number ${rangeText('planM')} m: torsional eccentricity along ${direction} not computed`,
+        `plan dimension ${String(plan)} m is not a number ${rangeText(PLAUSIBLE.planM)} m: torsional eccentricity along ${direction} not computed`,
       );
     }
-    const unplaced = walls.filter((w) => {
+    let fields = '';
+    const unplacedStoreys: number[] = [];
+    for (const w of walls) {
+      if (w.treatment !== 'shear-wall') continue;
       const pos = s.survey.walls[w.index]?.positionM ?? null;
-      return w.treatment === 'shear-wall' && !plausible(pos, 'positionM');
-    });
-    if (unplaced.length > 0) {
+      if (plausible(pos, PLAUSIBLE.positionM)) continue;
+      fields += `${fields === '' ? '' : ', '}walls[${w.index}].positionM`;
+      if (!unplacedStoreys.includes(w.storey)) unplacedStoreys.push(w.storey);
+    }
+    if (fields !== '') {
       findings.missing(
-        unplaced.map((w) => `walls[${w.index}].positionM`).join(', '),
-        `wall positions unknown: torsional eccentricity along ${direction} not computed for storeys ${[...new Set(unplaced.map((w) => w.storey))].join(', ')}`,
+        fields,
+        `wall positions unknown: torsional eccentricity along ${direction} not computed for storeys ${unplacedStoreys.join(', ')}`,
       );
     }
   }
@@ -309,10 +332,10 @@ export function buildingResponse(survey: SurveyInput): BuildingResponse {
   }
   const masses = storeyMasses({ ...building, storeys: storeyInputs }, findings);
   const heights: (number | null)[] = storeyInputs.map((st, i) => {
-    if (plausible(st.heightM, 'storeyHeightM')) return st.heightM;
+    if (plausible(st.heightM, PLAUSIBLE.storeyHeightM)) return st.heightM;
     findings.invalid(
       `building.storeys[${i}].heightM`,
-      `storey height ${String(st.heightM)} m is not a number ${rangeText('storeyHeightM')} m: total height, empirical period and that storey's drift ratio unknown`,
+      `storey height ${String(st.heightM)} m is not a number ${rangeText(PLAUSIBLE.storeyHeightM)} m: total height, empirical period and that storey's drift ratio unknown`,
     );
     return null;
   });
@@ -329,23 +352,24 @@ export function buildingResponse(survey: SurveyInput): BuildingResponse {
       ? masses.reduce((a, m) => a + (m.massKg as number), 0)
       : null;
 
-  const hazard = checkHazard(survey.hazard, findings);
-  let damping = REFERENCE_DAMPING;
-  if (hazard !== null) {
-    if (hazard.damping === undefined) {
-      findings.assume(
-        'demand.damping',
-        'Spectrum ordinates at 5 % viscous damping.',
-        'reference damping of EN 1998-1:2004 §3.2.2.2 and ASCE 7-16 §11.4.6',
-      );
-    } else damping = hazard.damping;
+  const checked = checkHazard(survey.hazard, findings);
+  if (checked !== null && checked.spec.damping === undefined) {
+    findings.assume(
+      'demand.damping',
+      `Spectrum ordinates at ${100 * REFERENCE_DAMPING} % viscous damping.`,
+      'reference damping of EN 1998-1:2004 §3.2.2.2 and ASCE 7-16 §11.4.6',
+    );
   }
+  const method = checked !== null && checked.spec.kind === 'ec8' ? 'ec8' : 'asce7';
+  const ec8S = totalHeightM === null ? null : empiricalPeriod(totalHeightM, 'ec8');
+  const asce7S = totalHeightM === null ? null : empiricalPeriod(totalHeightM, 'asce7');
+  const rangeWarnings = totalHeightM === null ? [] : empiricalPeriodRange(totalHeightM, method);
 
   let measuredS: number | null = null;
   let measuredDirection: Direction | null = null;
   const m = survey.measured;
   if (m !== null && m !== undefined) {
-    if (plausible(m.frequencyHz, 'frequencyHz')) {
+    if (plausible(m.frequencyHz, PLAUSIBLE.frequencyHz)) {
       measuredS = 1 / m.frequencyHz;
       measuredDirection = m.direction === 'x' || m.direction === 'y' ? m.direction : null;
       if (measuredDirection === null) {
@@ -363,7 +387,7 @@ export function buildingResponse(survey: SurveyInput): BuildingResponse {
     } else {
       findings.invalid(
         'measured.frequencyHz',
-        `${String(m.frequencyHz)} Hz is not a number ${rangeText('frequencyHz')} Hz; not used`,
+        `${String(m.frequencyHz)} Hz is not a number ${rangeText(PLAUSIBLE.frequencyHz)} Hz; not used`,
       );
     }
   }
@@ -384,8 +408,11 @@ export function buildingResponse(survey: SurveyInput): BuildingResponse {
 
   const shared: Shared = {
     survey,
-    hazard,
-    damping,
+    hazard: checked === null ? null : checked.spec,
+    spectrum: checked === null ? null : checked.spectrum,
+    ec8S,
+    asce7S,
+    rangeWarnings,
     masses,
     massValues,
     heights,

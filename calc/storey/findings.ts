@@ -29,6 +29,11 @@ export class Findings {
   readonly missingInputs: MissingInput[] = [];
   private readonly seen = new Set<string>();
 
+  /** True once an assumption with this id has been recorded (lets callers skip building text). */
+  has(id: string): boolean {
+    return this.seen.has(id);
+  }
+
   assume(id: string, text: string, source: string): void {
     if (this.seen.has(id)) return;
     this.seen.add(id);

@@ -24,16 +24,15 @@ export const PLAUSIBLE = {
   hazardValue: [0, 100],
 } as const satisfies Record<string, readonly [number, number]>;
 
-export type PlausibleKey = keyof typeof PLAUSIBLE;
+/** A [low, high] plausibility range, both ends included. */
+export type PlausibleRange = readonly [number, number];
 
-/** True when x is a finite number inside the plausible range of `key` (both ends included). */
-export function plausible(x: unknown, key: PlausibleKey): x is number {
-  const [lo, hi] = PLAUSIBLE[key];
-  return typeof x === 'number' && Number.isFinite(x) && x >= lo && x <= hi;
+/** True when x is a number inside `range` (both ends included; NaN fails). */
+export function plausible(x: unknown, range: PlausibleRange): x is number {
+  return typeof x === 'number' && x >= range[0] && x <= range[1];
 }
 
-/** "from 0.1 to 30" — the range of `key` for messages. */
-export function rangeText(key: PlausibleKey): string {
-  const [lo, hi] = PLAUSIBLE[key];
-  return `from ${lo} to ${hi}`;
+/** "from 0.1 to 30", for messages. */
+export function rangeText(range: PlausibleRange): string {
+  return `from ${range[0]} to ${range[1]}`;
 }

@@ -1,7 +1,12 @@
 import type { ShearBuildingModes } from '../modal/shear-building-modes.js';
-import { spectralAcceleration } from '../spectra/spectral-acceleration.js';
-import type { SpectrumSpec } from '../spectra/spectrum-spec.js';
+import {
+  resolvedSpectralAcceleration,
+  type ResolvedSpectrum,
+} from '../spectra/resolved-spectrum.js';
 import { G } from '../units/gravity.js';
+
+/** Local copy of g (m/s²) for the loops below. */
+const g = G;
 
 /** Elastic seismic demand on the storeys in one direction. */
 export interface SeismicDemand {
@@ -46,8 +51,7 @@ function driftRatios(
  * (ASCE 7-16 §12.9.1.3 lists SRSS too). Elastic: no behaviour or response-modification factor.
  */
 export function modalDemand(
-  spec: SpectrumSpec,
-  dampingRatio: number,
+  spectrum: ResolvedSpectrum,
   modes: ShearBuildingModes,
   masses: readonly number[],
   heights: readonly (number | null)[],
@@ -60,9 +64,9 @@ export function modalDemand(
   let roof = 0;
   for (let j = 0; j < modes.periods.length; j++) {
     const T = modes.periods[j]!;
-    const sa = spectralAcceleration(spec, T);
+    const sa = resolvedSpectralAcceleration(spectrum, T);
     const w = T / (2 * Math.PI);
-    const sd = sa * G * w * w;
+    const sd = sa * g * w * w;
     const gamma = modes.participationFactors[j]!;
     const phi = modes.shapes[j]!;
     if (j === 0) {
@@ -73,7 +77,7 @@ export function modalDemand(
     // Storey shear: sum of floor forces from the roof down.
     let v = 0;
     for (let i = n - 1; i >= 0; i--) {
-      v += gamma * phi[i]! * masses[i]! * sa * G;
+      v += gamma * phi[i]! * masses[i]! * sa * g;
       shear2[i] = shear2[i]! + v * v;
       const d = gamma * (phi[i]! - (i > 0 ? phi[i - 1]! : 0)) * sd;
       drift2[i] = drift2[i]! + d * d;
@@ -88,7 +92,7 @@ export function modalDemand(
   return {
     method: 'modal-srss',
     periodS: modes.periods[0]!,
-    dampingRatio,
+    dampingRatio: spectrum.dampingRatio,
     spectralAccelerationG: sa1,
     spectralDisplacementM: sd1,
     baseShearN: storeyShearsN[0]!,
@@ -116,19 +120,19 @@ export function elfExponent(T: number): number {
  * linear in height (EN 1998-1:2004 §4.3.3.2.3(3) allows it): Γ = Σmφ/Σmφ², floor
  * displacement Γ·φi·Sd(T), so every storey drifts Γ·Sd·hi/H.
  *
+ * @param spectrum the hazard, resolved once (resolveSpectrum).
  * @param heights storey heights (all > 0, ground storey first), in m.
  */
 export function elfDemand(
-  spec: SpectrumSpec,
-  dampingRatio: number,
+  spectrum: ResolvedSpectrum,
   T: number,
   masses: readonly number[],
   heights: readonly number[],
 ): SeismicDemand {
   const n = masses.length;
-  const sa = spectralAcceleration(spec, T);
+  const sa = resolvedSpectralAcceleration(spectrum, T);
   const w = T / (2 * Math.PI);
-  const sd = sa * G * w * w;
+  const sd = sa * g * w * w;
   const levels = new Float64Array(n);
   let H = 0;
   let totalMass = 0;
@@ -150,7 +154,7 @@ export function elfDemand(
     mPhi += masses[i]! * phi;
     mPhi2 += masses[i]! * phi * phi;
   }
-  const V = sa * G * totalMass;
+  const V = sa * g * totalMass;
   const gamma = mPhi2 > 0 ? mPhi / mPhi2 : 0;
   const storeyShearsN: number[] = new Array<number>(n);
   const storeyDriftsM: number[] = new Array<number>(n);
@@ -163,7 +167,7 @@ export function elfDemand(
   return {
     method: 'elf',
     periodS: T,
-    dampingRatio,
+    dampingRatio: spectrum.dampingRatio,
     spectralAccelerationG: sa,
     spectralDisplacementM: sd,
     baseShearN: storeyShearsN[0]!,

@@ -1,8 +1,12 @@
 import { G } from '../units/gravity.js';
 import type { BuildingInput, FloorConstruction, RoofConstruction } from '../survey/survey-input.js';
 import { Findings } from './findings.js';
-import { plausible, rangeText } from './plausible-ranges.js';
+import { PLAUSIBLE as PLAUSIBLE_RANGES, plausible, rangeText } from './plausible-ranges.js';
 import { FLOOR_UNIT_WEIGHTS, ROOF_UNIT_WEIGHTS } from './unit-weights.js';
+
+/** Module-local alias: read once, not through an import binding in hot loops. */
+const PLAUSIBLE = PLAUSIBLE_RANGES;
+const g = G;
 
 /**
  * The seismic mass lumped at the top of one storey: the floor of the storey above, or the
@@ -27,6 +31,10 @@ export interface StoreyMass {
 }
 
 const ENTERED_SOURCE = 'unit weight entered in the survey';
+
+function weightField(top: boolean, carrierIndex: number): string {
+  return top ? 'building.roofUnitWeightPa' : `building.storeys[${carrierIndex}].unitWeightPa`;
+}
 
 /**
  * Seismic mass per storey from floor areas and unit weights (entered, else the construction
@@ -57,9 +65,6 @@ export function storeyMasses(building: BuildingInput, findings: Findings): Store
       ? building.roofConstruction
       : carrierStorey.floorConstruction;
     const entered = top ? building.roofUnitWeightPa : carrierStorey.unitWeightPa;
-    const weightField = top
-      ? 'building.roofUnitWeightPa'
-      : `building.storeys[${carrierIndex}].unitWeightPa`;
     const table = top
       ? ROOF_UNIT_WEIGHTS[construction as RoofConstruction]
       : FLOOR_UNIT_WEIGHTS[construction as FloorConstruction];
@@ -67,15 +72,15 @@ export function storeyMasses(building: BuildingInput, findings: Findings): Store
     let unitWeightPa: number | null = null;
     let basis: StoreyMass['basis'] = 'unknown';
     let source: string;
-    if (entered !== null && plausible(entered, 'unitWeightPa')) {
+    if (entered !== null && plausible(entered, PLAUSIBLE.unitWeightPa)) {
       unitWeightPa = entered;
       basis = 'entered';
       source = ENTERED_SOURCE;
     } else {
       if (entered !== null) {
         findings.invalid(
-          weightField,
-          `unit weight ${String(entered)} Pa is not a number ${rangeText('unitWeightPa')} Pa; the default is used`,
+          weightField(top, carrierIndex),
+          `unit weight ${String(entered)} Pa is not a number ${rangeText(PLAUSIBLE.unitWeightPa)} Pa; the default is used`,
         );
       }
       if (table === undefined) {
@@ -88,31 +93,37 @@ export function storeyMasses(building: BuildingInput, findings: Findings): Store
         unitWeightPa = table.pa;
         basis = 'default';
         source = table.source;
-        findings.assume(
-          `mass.default.${top ? 'roof' : 'floor'}.${construction}`,
-          `${top ? 'Roof' : 'Floor'} construction '${construction}' taken at ${table.pa} Pa seismic weight per m².`,
-          table.source,
-        );
+        const id = `mass.default.${top ? 'roof' : 'floor'}.${construction}`;
+        if (!findings.has(id)) {
+          findings.assume(
+            id,
+            `${top ? 'Roof' : 'Floor'} construction '${construction}' taken at ${table.pa} Pa seismic weight per m².`,
+            table.source,
+          );
+        }
       }
     }
 
     const area = carrierStorey.floorAreaM2;
     let areaM2: number | null = null;
-    if (plausible(area, 'floorAreaM2')) areaM2 = area;
+    if (plausible(area, PLAUSIBLE.floorAreaM2)) areaM2 = area;
     else {
       findings.invalid(
         `building.storeys[${carrierIndex}].floorAreaM2`,
-        `floor area ${String(area)} m² is not a number ${rangeText('floorAreaM2')} m²; mass of storey ${i} unknown`,
+        `floor area ${String(area)} m² is not a number ${rangeText(PLAUSIBLE.floorAreaM2)} m²; mass of storey ${i} unknown`,
       );
     }
-    let massKg = areaM2 !== null && unitWeightPa !== null ? (areaM2 * unitWeightPa) / G : null;
+    let massKg = areaM2 !== null && unitWeightPa !== null ? (areaM2 * unitWeightPa) / g : null;
     if (massKg !== null && !Number.isFinite(massKg)) {
-      findings.invalid(weightField, `area × unit weight overflows; mass of storey ${i} unknown`);
+      findings.invalid(
+        weightField(top, carrierIndex),
+        `area × unit weight overflows; mass of storey ${i} unknown`,
+      );
       massKg = null;
     }
     if (massKg === 0) {
       findings.invalid(
-        weightField,
+        weightField(top, carrierIndex),
         `storey ${i} carries no mass (unit weight 0 or a floor on grade above the ground storey); modal analysis needs every storey’s mass > 0`,
       );
     }

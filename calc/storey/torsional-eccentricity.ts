@@ -1,6 +1,9 @@
-import { plausible } from './plausible-ranges.js';
+import { PLAUSIBLE as PLAUSIBLE_RANGES, plausible } from './plausible-ranges.js';
 import type { WallContribution } from './wall-contribution.js';
 import type { Direction, WallInput } from '../survey/survey-input.js';
+
+/** Module-local alias: read once, not through an import binding in hot loops. */
+const PLAUSIBLE = PLAUSIBLE_RANGES;
 
 /**
  * Static eccentricity between the centre of rigidity of the walls along `direction` and the
@@ -29,7 +32,7 @@ export function torsionalEccentricity(
     if (c.direction !== direction || c.treatment !== 'shear-wall') continue;
     const k = c.stiffnessNPerM ?? 0;
     const pos = walls[c.index]?.positionM ?? null;
-    if (!plausible(pos, 'positionM')) {
+    if (!plausible(pos, PLAUSIBLE.positionM)) {
       unknown[c.storey] = 1;
       continue;
     }
@@ -38,7 +41,7 @@ export function torsionalEccentricity(
   }
   const out: (number | null)[] = new Array<number | null>(storeyCount);
   const dim = planDimensionM;
-  const usable = plausible(dim, 'planM');
+  const usable = plausible(dim, PLAUSIBLE.planM);
   for (let i = 0; i < storeyCount; i++) {
     if (!usable || unknown[i] === 1 || !(sumK[i]! > 0)) {
       out[i] = null;

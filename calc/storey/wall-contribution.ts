@@ -6,8 +6,16 @@ import {
   type CltConnectors,
 } from './clt-connectors.js';
 import { Findings } from './findings.js';
-import { plausible, rangeText, type PlausibleKey } from './plausible-ranges.js';
+import {
+  PLAUSIBLE as PLAUSIBLE_RANGES,
+  plausible,
+  rangeText,
+  type PlausibleRange,
+} from './plausible-ranges.js';
 import { WALL_UNIT_VALUES } from './wall-unit-values.js';
+
+/** Module-local alias: read once, not through an import binding in hot loops. */
+const PLAUSIBLE = PLAUSIBLE_RANGES;
 
 /** How a wall entered the storey model. */
 export type WallTreatment =
@@ -39,56 +47,161 @@ export interface WallContribution {
 }
 
 /** Plausible range of each connector field. */
-const CONNECTOR_RANGE: Record<keyof ConnectorInput, PlausibleKey> = {
-  holdDownCount: 'connectorCount',
-  bracketCount: 'connectorCount',
-  holdDownCapacityN: 'connectorCapacityN',
-  bracketCapacityN: 'connectorCapacityN',
-  holdDownStiffnessNPerM: 'connectorStiffnessNPerM',
-  bracketStiffnessNPerM: 'connectorStiffnessNPerM',
+const CONNECTOR_RANGE: Record<keyof ConnectorInput, PlausibleRange> = {
+  holdDownCount: PLAUSIBLE.connectorCount,
+  bracketCount: PLAUSIBLE.connectorCount,
+  holdDownCapacityN: PLAUSIBLE.connectorCapacityN,
+  bracketCapacityN: PLAUSIBLE.connectorCapacityN,
+  holdDownStiffnessNPerM: PLAUSIBLE.connectorStiffnessNPerM,
+  bracketStiffnessNPerM: PLAUSIBLE.connectorStiffnessNPerM,
 };
 
+/** An entered connector value, or null (typical value to be used), listing a bad entry. */
 function connectorValue(
   connectors: ConnectorInput | null,
   key: keyof ConnectorInput,
   fallback: number,
-  field: string,
+  index: number,
   findings: Findings,
-): { value: number; typical: boolean } {
+): number | null {
   const v = connectors === null ? null : connectors[key];
-  if (v === null || v === undefined) return { value: fallback, typical: true };
-  if (plausible(v, CONNECTOR_RANGE[key])) return { value: v, typical: false };
+  if (v === null || v === undefined) return null;
+  if (plausible(v, CONNECTOR_RANGE[key])) return v;
   findings.invalid(
-    `${field}.${key}`,
+    `walls[${index}].connectors.${key}`,
     `${String(v)} is not a number ${rangeText(CONNECTOR_RANGE[key])}; the typical value ${fallback} is used`,
   );
-  return { value: fallback, typical: true };
+  return null;
+}
+
+/** Resolves one connector field into `out`, noting when the typical value was used. */
+function resolveOne(
+  c: ConnectorInput | null,
+  key: keyof ConnectorInput,
+  fallback: number,
+  index: number,
+  findings: Findings,
+  typicalUsed: string[],
+): number {
+  const v = connectorValue(c, key, fallback, index, findings);
+  if (v !== null) return v;
+  typicalUsed.push(key);
+  return fallback;
 }
 
 function resolveConnectors(
   wall: WallInput,
-  field: string,
+  index: number,
   findings: Findings,
-): { connectors: CltConnectors; typicalUsed: string[] } {
+  typicalUsed: string[],
+): CltConnectors {
   const c = wall.connectors;
-  const typicalUsed: string[] = [];
-  const pick = (key: keyof ConnectorInput, fallback: number): number => {
-    const r = connectorValue(c, key, fallback, `${field}.connectors`, findings);
-    if (r.typical) typicalUsed.push(key);
-    return r.value;
-  };
   // One angle bracket per metre, at least two (common practice, no source).
   const bracketDefault = Math.max(2, Math.ceil(wall.lengthM / CLT_TYPICAL.bracketSpacingM));
-  const connectors: CltConnectors = {
-    holdDownCount: pick('holdDownCount', CLT_TYPICAL.holdDownCount),
-    holdDownCapacityN: pick('holdDownCapacityN', CLT_TYPICAL.holdDownCapacityN),
-    holdDownStiffnessNPerM: pick('holdDownStiffnessNPerM', CLT_TYPICAL.holdDownStiffnessNPerM),
-    bracketCount: pick('bracketCount', bracketDefault),
-    bracketCapacityN: pick('bracketCapacityN', CLT_TYPICAL.bracketCapacityN),
-    bracketStiffnessNPerM: pick('bracketStiffnessNPerM', CLT_TYPICAL.bracketStiffnessNPerM),
+  return {
+    holdDownCount: resolveOne(
+      c,
+      'holdDownCount',
+      CLT_TYPICAL.holdDownCount,
+      index,
+      findings,
+      typicalUsed,
+    ),
+    holdDownCapacityN: resolveOne(
+      c,
+      'holdDownCapacityN',
+      CLT_TYPICAL.holdDownCapacityN,
+      index,
+      findings,
+      typicalUsed,
+    ),
+    holdDownStiffnessNPerM: resolveOne(
+      c,
+      'holdDownStiffnessNPerM',
+      CLT_TYPICAL.holdDownStiffnessNPerM,
+      index,
+      findings,
+      typicalUsed,
+    ),
+    bracketCount: resolveOne(c, 'bracketCount', bracketDefault, index, findings, typicalUsed),
+    bracketCapacityN: resolveOne(
+      c,
+      'bracketCapacityN',
+      CLT_TYPICAL.bracketCapacityN,
+      index,
+      findings,
+      typicalUsed,
+    ),
+    bracketStiffnessNPerM: resolveOne(
+      c,
+      'bracketStiffnessNPerM',
+      CLT_TYPICAL.bracketStiffnessNPerM,
+      index,
+      findings,
+      typicalUsed,
+    ),
   };
-  return { connectors, typicalUsed };
 }
+
+/** One result object, always with the same shape (keeps the hot loop monomorphic). */
+function contribution(
+  wall: WallInput,
+  index: number,
+  treatment: WallTreatment,
+  stiffnessNPerM: number | null,
+  strengthN: number | null,
+  basis: WallContribution['basis'],
+  source: string,
+): WallContribution {
+  return {
+    wallId: typeof wall.id === 'string' ? wall.id : String(wall.id),
+    index,
+    storey: wall.storey,
+    direction: wall.direction,
+    type: wall.type,
+    treatment,
+    stiffnessNPerM,
+    strengthN,
+    basis,
+    source,
+  };
+}
+
+/** Checks one user-entered unit value; false (and listed) when it is missing or out of range. */
+function userValueOk(
+  x: number | null,
+  name: 'userUnitShearNPerM' | 'userUnitStiffnessNPerM2',
+  wall: WallInput,
+  index: number,
+  findings: Findings,
+): boolean {
+  if (x === null) {
+    findings.missing(
+      `walls[${index}].${name}`,
+      `wall ${wall.id} has no ${name}; it is left out of its storey's stiffness and strength`,
+    );
+    return false;
+  }
+  if (!plausible(x, PLAUSIBLE[name])) {
+    findings.invalid(
+      `walls[${index}].${name}`,
+      `${String(x)} is not a number ${rangeText(PLAUSIBLE[name])}; wall ${wall.id} left out`,
+    );
+    return false;
+  }
+  return true;
+}
+
+const SHEAR_TERM_TEXT =
+  'Sheathed wall stiffness is Ga·L/h, the shear term of SDPWS eq. (4.3-1); bending and hold-down slip are left out, so narrow wall segments come out too stiff.';
+const SHEAR_TERM_SOURCE =
+  'AWC SDPWS-2015 eq. (4.3-1), shear and nail-slip term only (modelling choice)';
+const ROCKING_TEXT =
+  'Rocking walls are left out of the shear-wall storey stiffness, strength and centre of rigidity; the rocking assessment covers them.';
+const ROCKING_SOURCE =
+  'modelling choice: a wall that uplifts does not act as a linear shear spring (Housner 1963, BSSA 53(2):403)';
+const CLT_SOURCE =
+  'CLT wall governed by hold-downs (rocking) and angle brackets (sliding), rigid panel, gravity neglected';
 
 /** The wall's values before the overflow guard of {@link wallContribution}. */
 function wallContributionUnchecked(
@@ -97,155 +210,155 @@ function wallContributionUnchecked(
   storeyHeights: readonly (number | null)[],
   findings: Findings,
 ): WallContribution {
-  const field = `walls[${index}]`;
-  const base = {
-    wallId: String(wall.id),
-    index,
-    storey: wall.storey,
-    direction: wall.direction,
-    type: wall.type,
-  };
-  const excluded = (treatment: WallTreatment, source: string): WallContribution => ({
-    ...base,
-    treatment,
-    stiffnessNPerM: null,
-    strengthN: null,
-    basis: 'none',
-    source,
-  });
-
-  if (!Number.isInteger(wall.storey) || wall.storey < 0 || wall.storey >= storeyHeights.length) {
+  const storey = wall.storey;
+  if (!Number.isInteger(storey) || storey < 0 || storey >= storeyHeights.length) {
     findings.invalid(
-      `${field}.storey`,
-      `storey ${String(wall.storey)} does not exist; wall left out`,
+      `walls[${index}].storey`,
+      `storey ${String(storey)} does not exist; wall left out`,
     );
-    return excluded('excluded-invalid', 'storey index out of range');
+    return contribution(
+      wall,
+      index,
+      'excluded-invalid',
+      null,
+      null,
+      'none',
+      'storey index out of range',
+    );
   }
   if (wall.direction !== 'x' && wall.direction !== 'y') {
     findings.invalid(
-      `${field}.direction`,
+      `walls[${index}].direction`,
       `direction ${String(wall.direction)} is not 'x' or 'y'; wall left out`,
     );
-    return excluded('excluded-invalid', 'direction not x or y');
+    return contribution(
+      wall,
+      index,
+      'excluded-invalid',
+      null,
+      null,
+      'none',
+      'direction not x or y',
+    );
   }
-  if (wall.devices !== undefined && wall.devices.length > 0) {
+  if (Array.isArray(wall.devices) && wall.devices.length > 0) {
     findings.assume(
       `wall.devices.${index}`,
-      `Wall ${base.wallId} has supplemental devices (${wall.devices.join(', ')}); they are not modelled and call for a detailed assessment.`,
+      `Wall ${wall.id} has supplemental devices (${wall.devices.join(', ')}); they are not modelled and call for a detailed assessment.`,
       'scope of this screening model (common practice)',
     );
   }
   if (wall.type === 'rocking') {
-    findings.assume(
-      'wall.rocking-excluded',
-      'Rocking walls are left out of the shear-wall storey stiffness, strength and centre of rigidity; the rocking assessment covers them.',
-      'modelling choice: a wall that uplifts does not act as a linear shear spring (Housner 1963, BSSA 53(2):403)',
+    findings.assume('wall.rocking-excluded', ROCKING_TEXT, ROCKING_SOURCE);
+    return contribution(
+      wall,
+      index,
+      'excluded-rocking',
+      null,
+      null,
+      'none',
+      'rocking wall: assessed by the rocking module',
     );
-    return excluded('excluded-rocking', 'rocking wall: assessed by the rocking module');
   }
-  if (!plausible(wall.lengthM, 'wallLengthM')) {
+  if (!plausible(wall.lengthM, PLAUSIBLE.wallLengthM)) {
     findings.invalid(
-      `${field}.lengthM`,
-      `length ${String(wall.lengthM)} m is not a number ${rangeText('wallLengthM')} m; wall left out`,
+      `walls[${index}].lengthM`,
+      `length ${String(wall.lengthM)} m is not a number ${rangeText(PLAUSIBLE.wallLengthM)} m; wall left out`,
     );
-    return excluded('excluded-invalid', 'length not > 0');
+    return contribution(wall, index, 'excluded-invalid', null, null, 'none', 'length out of range');
   }
   const L = wall.lengthM;
 
   if (wall.type === 'user') {
     const v = wall.userUnitShearNPerM;
     const k = wall.userUnitStiffnessNPerM2;
-    let ok = true;
-    for (const [name, x] of [
-      ['userUnitShearNPerM', v],
-      ['userUnitStiffnessNPerM2', k],
-    ] as const) {
-      if (x === null) {
-        findings.missing(
-          `${field}.${name}`,
-          `wall ${base.wallId} has no ${name}; it is left out of its storey's stiffness and strength`,
-        );
-        ok = false;
-      } else if (!plausible(x, name)) {
-        findings.invalid(
-          `${field}.${name}`,
-          `${String(x)} is not a number ${rangeText(name)}; wall ${base.wallId} left out`,
-        );
-        ok = false;
-      }
+    const okV = userValueOk(v, 'userUnitShearNPerM', wall, index, findings);
+    const okK = userValueOk(k, 'userUnitStiffnessNPerM2', wall, index, findings);
+    if (!okV || !okK) {
+      return contribution(
+        wall,
+        index,
+        'excluded-unknown',
+        null,
+        null,
+        'none',
+        'user values missing',
+      );
     }
-    if (!ok) return excluded('excluded-unknown', 'user values missing');
-    return {
-      ...base,
-      treatment: 'shear-wall',
-      stiffnessNPerM: (k as number) * L,
-      strengthN: (v as number) * L,
-      basis: 'entered',
-      source: 'unit shear and unit stiffness entered in the survey',
-    };
+    return contribution(
+      wall,
+      index,
+      'shear-wall',
+      (k as number) * L,
+      (v as number) * L,
+      'entered',
+      'unit shear and unit stiffness entered in the survey',
+    );
   }
 
   // The remaining types need the wall height: its own, else the storey's.
-  let h: number | null = null;
-  if (wall.heightM !== null && plausible(wall.heightM, 'wallHeightM')) h = wall.heightM;
+  let h: number | null;
+  if (wall.heightM !== null && plausible(wall.heightM, PLAUSIBLE.wallHeightM)) h = wall.heightM;
   else {
     if (wall.heightM !== null) {
       findings.invalid(
-        `${field}.heightM`,
-        `height ${String(wall.heightM)} m is not a number ${rangeText('wallHeightM')} m; the storey height is used`,
+        `walls[${index}].heightM`,
+        `height ${String(wall.heightM)} m is not a number ${rangeText(PLAUSIBLE.wallHeightM)} m; the storey height is used`,
       );
     }
-    h = storeyHeights[wall.storey] ?? null;
+    h = storeyHeights[storey] ?? null;
   }
   if (h === null) {
     findings.missing(
-      `${field}.heightM`,
-      `no usable wall or storey height; wall ${base.wallId} left out`,
+      `walls[${index}].heightM`,
+      `no usable wall or storey height; wall ${wall.id} left out`,
     );
-    return excluded('excluded-unknown', 'no usable height');
+    return contribution(wall, index, 'excluded-unknown', null, null, 'none', 'no usable height');
   }
 
   if (wall.type === 'clt-bracketed') {
-    const { connectors, typicalUsed } = resolveConnectors(wall, field, findings);
+    const typicalUsed: string[] = [];
+    const connectors = resolveConnectors(wall, index, findings, typicalUsed);
     const r = cltWallResistance(connectors, L, h);
-    let source =
-      'CLT wall governed by hold-downs (rocking) and angle brackets (sliding), rigid panel, gravity neglected';
+    let source = CLT_SOURCE;
     if (typicalUsed.length > 0) {
-      source += `; typical values used for ${typicalUsed.join(', ')}`;
+      const list = typicalUsed.join(', ');
+      source = `${CLT_SOURCE}; typical values used for ${list}`;
       findings.assume(
         `wall.clt-typical.${index}`,
-        `CLT wall ${base.wallId}: typical connector values used for ${typicalUsed.join(', ')} (not entered).`,
+        `CLT wall ${wall.id}: typical connector values used for ${list} (not entered).`,
         CLT_TYPICAL_SOURCE,
       );
     }
-    return {
-      ...base,
-      treatment: 'shear-wall',
-      stiffnessNPerM: r.stiffnessNPerM,
-      strengthN: r.strengthN,
-      basis: 'connectors',
+    return contribution(
+      wall,
+      index,
+      'shear-wall',
+      r.stiffnessNPerM,
+      r.strengthN,
+      'connectors',
       source,
-    };
+    );
   }
 
   const unit = WALL_UNIT_VALUES[wall.type];
   if (unit === undefined) {
-    findings.invalid(`${field}.type`, `wall type ${String(wall.type)} is unknown; wall left out`);
-    return excluded('excluded-invalid', 'unknown wall type');
+    findings.invalid(
+      `walls[${index}].type`,
+      `wall type ${String(wall.type)} is unknown; wall left out`,
+    );
+    return contribution(wall, index, 'excluded-invalid', null, null, 'none', 'unknown wall type');
   }
-  findings.assume(
-    'wall.sdpws-shear-term',
-    'Sheathed wall stiffness is Ga·L/h, the shear term of SDPWS eq. (4.3-1); bending and hold-down slip are left out, so narrow wall segments come out too stiff.',
-    'AWC SDPWS-2015 eq. (4.3-1), shear and nail-slip term only (modelling choice)',
+  findings.assume('wall.sdpws-shear-term', SHEAR_TERM_TEXT, SHEAR_TERM_SOURCE);
+  return contribution(
+    wall,
+    index,
+    'shear-wall',
+    (unit.apparentShearStiffnessNPerM * L) / h,
+    unit.unitShearNPerM * L,
+    'table',
+    unit.source,
   );
-  return {
-    ...base,
-    treatment: 'shear-wall',
-    stiffnessNPerM: (unit.apparentShearStiffnessNPerM * L) / h,
-    strengthN: unit.unitShearNPerM * L,
-    basis: 'table',
-    source: unit.source,
-  };
 }
 
 /**
@@ -274,14 +387,11 @@ export function wallContribution(
     !(Number.isFinite(c.stiffnessNPerM) && Number.isFinite(c.strengthN))
   ) {
     findings.invalid(`walls[${index}]`, `wall ${c.wallId} values overflow; wall left out`);
-    return {
-      ...c,
-      treatment: 'excluded-invalid',
-      stiffnessNPerM: null,
-      strengthN: null,
-      basis: 'none',
-      source: 'values overflow',
-    };
+    c.treatment = 'excluded-invalid';
+    c.stiffnessNPerM = null;
+    c.strengthN = null;
+    c.basis = 'none';
+    c.source = 'values overflow';
   }
   return c;
 }

@@ -51,14 +51,14 @@ describe('symmetricTridiagonalEigen', () => {
           for (let j = 1; j < n; j++) expect(d[j]!).toBeGreaterThanOrEqual(d[j - 1]!);
           for (let j = 0; j < n; j++) {
             for (let i = 0; i < n; i++) {
-              let av = diag[i]! * v[i * n + j]!;
-              if (i > 0) av += sub[i - 1]! * v[(i - 1) * n + j]!;
-              if (i < n - 1) av += sub[i]! * v[(i + 1) * n + j]!;
-              expect(Math.abs(av - d[j]! * v[i * n + j]!)).toBeLessThan(1e-12 * 30);
+              let av = diag[i]! * v[j * n + i]!;
+              if (i > 0) av += sub[i - 1]! * v[j * n + i - 1]!;
+              if (i < n - 1) av += sub[i]! * v[j * n + i + 1]!;
+              expect(Math.abs(av - d[j]! * v[j * n + i]!)).toBeLessThan(1e-12 * 30);
             }
             for (let k = 0; k < n; k++) {
               let dot = 0;
-              for (let i = 0; i < n; i++) dot += v[i * n + j]! * v[i * n + k]!;
+              for (let i = 0; i < n; i++) dot += v[j * n + i]! * v[k * n + i]!;
               expect(Math.abs(dot - (j === k ? 1 : 0))).toBeLessThan(1e-12);
             }
           }
