@@ -7,8 +7,8 @@
  *   `z.infer<typeof surveyRecordSchema>` is assignable to calc's `SurveyInput`.
  * - `surveyRecordV1Schema`, `SurveyRecordV1`, `migrateV1toV2` — the first version.
  * - `parseStoredRecord(raw)` — parse and migrate any stored value; never throws.
- * - `validateRecord(value)`, `messagesAt()`, `fieldMessages()`, `messagesByField()` —
- *   "valid to store", with `{ path, message }` per field.
+ * - `validateRecord(value)`, `isSurveyRecord(value)`, `messagesAt()`, `fieldMessages()`,
+ *   `messagesByField()` — "valid to store", with `{ path, message }` per field.
  * - `screeningGaps(record)` — "complete enough to screen", as a list of missing things.
  * - `emptySurvey(deviceId, now)` — a new draft, valid to store with nothing entered.
  * - `confirmField`, `markUnconfirmed`, `keepUnparsed`, `clearUnparsed`,
@@ -54,7 +54,10 @@ export type { SurveyRecordV1 } from './survey-record-v1.js';
 export { READABLE_VERSIONS, migrateV1toV2, parseStoredRecord } from './migrate.js';
 export type { ParseFailureReason, StoredParseResult } from './migrate.js';
 export { DEFAULTED_BUILDING_FIELDS, emptySurvey } from './empty-survey.js';
-export { messagesAt, validateRecord } from './validate.js';
+export { isSurveyRecord, messagesAt, validateRecord } from './validate.js';
+export { compileInPlaceCheck } from './in-place-check.js';
+export { isJsonValue, jsonValueSchema } from './json-value.js';
+export type { JsonValue } from './json-value.js';
 export type { ValidationResult } from './validate.js';
 export {
   fieldMessages,

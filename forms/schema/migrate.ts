@@ -13,6 +13,7 @@ import { fieldMessages, type FieldMessage } from './field-messages.js';
 import { en, type MessageCatalogue } from './messages.js';
 import { surveyRecordV1Schema, type SurveyRecordV1 } from './survey-record-v1.js';
 import { SCHEMA_VERSION, surveyRecordSchema, type SurveyRecord } from './survey-record.js';
+import { isSurveyRecord } from './validate.js';
 
 /** Why a stored value could not be read. */
 export type ParseFailureReason =
@@ -237,6 +238,8 @@ function parseUnguarded(raw: unknown, catalogue: MessageCatalogue): StoredParseR
       ],
     };
   }
+  // Current records are by far the most common: a fast in-place check, no copy.
+  if (version === SCHEMA_VERSION && isSurveyRecord(raw)) return { ok: true, record: raw, fromVersion: version };
   let value: unknown = raw;
   for (let v = version; v < SCHEMA_VERSION; v++) {
     const step = steps[v];

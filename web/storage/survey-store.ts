@@ -239,12 +239,8 @@ export class SurveyStore {
 
   /** Every readable current survey, most recently changed first. */
   async listSurveys(): Promise<SurveyRecord[]> {
-    const [keys, values] = await this.read((db) =>
-      inTransaction(db, ['surveys'], 'readonly', (tx) =>
-        Promise.all([tx.store.getAllKeys(), tx.store.getAll()]),
-      ),
-    );
-    return this.sortNewest(await this.parseCurrentRows(keys, values));
+    const values: unknown[] = await this.read((db) => db.getAll('surveys'));
+    return this.sortNewest(await this.parseCurrentRows(await this.keysOf(values, null), values));
   }
 
   /** Surveys whose result snapshot has this outcome (the `outcome` index). */
@@ -374,7 +370,13 @@ export class SurveyStore {
           quiet(revisions.add(toRevisionRow(r, kind, savedAt, null, this.tabId))),
         );
         const ids = [...candidates.keys()];
-        const currentRaw = await Promise.all(ids.map((id) => quiet(surveys.get(id))));
+        // For a big batch, one read of the existing keys spares a get for every new survey.
+        const existing = ids.length > 64 ? new Set<IDBValidKey>(await surveys.getAllKeys()) : null;
+        const currentRaw = await Promise.all(
+          ids.map((id) =>
+            existing === null || existing.has(id) ? quiet(surveys.get(id)) : undefined,
+          ),
+        );
         await Promise.all(adds);
         const updated: string[] = [];
         const puts: Promise<unknown>[] = [];
@@ -643,13 +645,33 @@ export class SurveyStore {
     index: 'outcome' | 'cell' | 'updatedAt',
     range: IDBKeyRange,
   ): Promise<SurveyRecord[]> {
-    const [keys, values] = await this.read((db) =>
-      inTransaction(db, ['surveys'], 'readonly', (tx) => {
-        const ix = tx.store.index(index);
-        return Promise.all([ix.getAllKeys(range), ix.getAll(range)]);
-      }),
-    );
+    const values: unknown[] = await this.read((db) => db.getAllFromIndex('surveys', index, range));
+    const keys = await this.keysOf(values, { index, range });
     return this.sortNewest(await this.parseCurrentRows(keys, values));
+  }
+
+  /**
+   * The primary keys of `surveys` rows read with getAll. The store's key path is `id`, so
+   * IndexedDB guarantees each row's `id` is its key; only if a row somehow lacks one are
+   * the keys read again (same query, same order).
+   */
+  private async keysOf(
+    values: unknown[],
+    query: { index: 'outcome' | 'cell' | 'updatedAt'; range: IDBKeyRange } | null,
+  ): Promise<IDBValidKey[]> {
+    const keys: IDBValidKey[] = [];
+    for (const v of values) {
+      const id = typeof v === 'object' && v !== null ? (v as { id?: unknown }).id : undefined;
+      if (typeof id !== 'string') {
+        return this.read((db) =>
+          query === null
+            ? db.getAllKeys('surveys')
+            : db.getAllKeysFromIndex('surveys', query.index, query.range),
+        );
+      }
+      keys.push(id);
+    }
+    return keys;
   }
 
   private async parseCurrentRows(keys: IDBValidKey[], values: unknown[]): Promise<SurveyRecord[]> {

@@ -1,0 +1,239 @@
+/**
+ * Storage benchmark: `npx tsx test/bench/storage.bench.ts` (BENCH_COUNT=… to change N).
+ *
+ * Bulk put and get of N (100,000) seeded random surveys (mulberry32), through the storage
+ * layer and through bare IndexedDB on the same data, side by side in one run:
+ *
+ * - put, ours: `SurveyStore.writeRevisions(records)` — zod validation of every record, one
+ *   revision row and one current row per record (with derived index fields), one
+ *   transaction.
+ * - put, bare (same layout): raw IndexedDB API, one transaction, the same two rows per
+ *   record, no validation. This is the like-for-like baseline the ratio uses.
+ * - put, bare (one row): one `put` per record into a single store: what the data costs
+ *   with no history at all, for context.
+ * - get, ours: `SurveyStore.listSurveys()` — every row read, parsed and migrated through
+ *   the schema, sorted newest first. Bare: `getAll()` on the same store.
+ * - get by id, 10,000 random ids: `getSurvey(id)` against a bare `get(id)`.
+ *
+ * Runs in Node on fake-indexeddb (an in-memory JavaScript implementation), so absolute
+ * figures say little about a phone; the ratios show the wrapper's own cost (validation,
+ * row building, parsing). The browser figures — the same bulk numbers on Chromium's
+ * IndexedDB, and the keystroke-to-durable-save latency p50/p95 under 4× CPU throttling
+ * (Emulation.setCPUThrottlingRate) — need a page with the survey form and are measured by
+ * the browser benchmark of phase two.
+ *
+ * A benchmark, not a test: it prints figures and never fails on speed.
+ */
+import 'fake-indexeddb/auto';
+import { IDBFactory } from 'fake-indexeddb';
+import { emptySurvey, type SurveyRecord } from '../../forms/index.js';
+import { SurveyStore } from '../../web/storage/index.js';
+import { cellOf, outcomeOf } from '../../web/storage/derived.js';
+import { mulberry32 } from './prng.js';
+
+const COUNT = Number(process.env.BENCH_COUNT ?? 100_000);
+const SEED = 20_250_611;
+const GOAL = 1.5;
+
+const rand = mulberry32(SEED);
+const between = (lo: number, hi: number) => lo + (hi - lo) * rand();
+const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
+
+function uuidFromRand(): string {
+  const hex = Array.from({ length: 32 }, () => Math.floor(rand() * 16).toString(16));
+  hex[12] = '4';
+  hex[16] = pick(['8', '9', 'a', 'b']);
+  const h = hex.join('');
+  return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
+}
+
+/** A plausible two- or three-storey survey, about 3 kB as JSON. */
+function makeSurvey(i: number): SurveyRecord {
+  const t = new Date(Date.UTC(2025, 5, 1) + i * 60_000);
+  const base = emptySurvey('bench-device', t, uuidFromRand());
+  const storeys = 2 + Math.floor(rand() * 2);
+  return {
+    ...base,
+    revision: 1 + Math.floor(rand() * 20),
+    address: `${1 + Math.floor(rand() * 200)} Bench Street, block ${i}`,
+    location: { lat: between(44, 46), lon: between(6, 9), accuracyM: between(3, 20), source: 'gps' },
+    inspector: 'Bench Inspector',
+    team: `Team ${i % 17}`,
+    building: {
+      ...base.building,
+      system: pick(['light-frame', 'mass-timber-panel'] as const),
+      planXM: between(8, 30),
+      planYM: between(6, 20),
+      storeys: Array.from({ length: storeys }, (_, s) => ({
+        heightM: between(2.5, 3.2),
+        floorAreaM2: between(60, 400),
+        floorConstruction: s === 0 ? 'on-grade' : pick(['light-timber', 'clt'] as const),
+        unitWeightPa: null,
+      })),
+    },
+    walls: Array.from({ length: storeys * 2 }, (_, w) => ({
+      id: `w${w}`,
+      storey: Math.floor(w / 2),
+      direction: w % 2 === 0 ? 'x' : 'y',
+      type: pick(['wsp-100', 'wsp-75', 'gypsum', 'clt-bracketed'] as const),
+      lengthM: between(2, 12),
+      heightM: null,
+      positionM: between(0, 20),
+      connectors: null,
+      rocking: null,
+      devices: [],
+      userUnitShearNPerM: null,
+      userUnitStiffnessNPerM2: null,
+    })),
+    observations: {
+      uplift: [],
+      residualDrift: [
+        {
+          storey: 0,
+          direction: 'x',
+          ratio: between(0, 0.02),
+          method: 'phone-tilt',
+          offsetM: null,
+          overHeightM: null,
+          tiltRad: between(-0.02, 0.02),
+          uncertainty: 0.001,
+        },
+      ],
+      checklist: [{ item: 'falling-hazard', severity: 'minor' }],
+      notes: 'Cracked plaster at the stair; chimney intact.',
+    },
+    hazard: { kind: 'ec8', type: 1, ground: pick(['A', 'B', 'C'] as const), ag: between(0.1, 0.35) },
+    result:
+      rand() < 0.7
+        ? {
+            calcVersion: '0.1.0',
+            computedAt: t.toISOString(),
+            result: { posting: pick(['open', 'limited', 'keep-out']), periodS: between(0.1, 0.5) },
+          }
+        : null,
+    unconfirmed: [],
+  };
+}
+
+function gc(): void {
+  (globalThis as { gc?: () => void }).gc?.();
+}
+
+async function time<T>(fn: () => Promise<T>): Promise<{ ms: number; value: T }> {
+  gc();
+  const t0 = performance.now();
+  const value = await fn();
+  return { ms: performance.now() - t0, value };
+}
+
+function req<T>(r: IDBRequest<T>): Promise<T> {
+  return new Promise((resolve, reject) => {
+    r.onsuccess = () => resolve(r.result);
+    r.onerror = () => reject(r.error);
+  });
+}
+
+function txDone(tx: IDBTransaction): Promise<void> {
+  return new Promise((resolve, reject) => {
+    tx.oncomplete = () => resolve();
+    tx.onerror = () => reject(tx.error);
+    tx.onabort = () => reject(tx.error);
+  });
+}
+
+/** Bare IndexedDB with the same stores and indexes as the app's database. */
+async function openBare(factory: IDBFactory): Promise<IDBDatabase> {
+  const r = factory.open('bare', 1);
+  r.onupgradeneeded = () => {
+    const db = r.result;
+    const s = db.createObjectStore('surveys', { keyPath: 'id' });
+    s.createIndex('updatedAt', 'updatedAt');
+    s.createIndex('outcome', 'outcome');
+    s.createIndex('cell', 'cell');
+    const rv = db.createObjectStore('revisions', { keyPath: 'seq', autoIncrement: true });
+    rv.createIndex('surveyId', 'surveyId');
+    rv.createIndex('surveyRevision', ['surveyId', 'revision']);
+    db.createObjectStore('plain', { keyPath: 'id' });
+  };
+  return req(r);
+}
+
+async function main(): Promise<void> {
+  console.log(`Storage bench: ${COUNT.toLocaleString('en')} surveys, seed ${SEED}, Node ${process.version}, fake-indexeddb`);
+  const records = Array.from({ length: COUNT }, (_, i) => makeSurvey(i));
+  const bytes = JSON.stringify(records[0]).length;
+  console.log(`one record ≈ ${bytes} bytes as JSON`);
+  // The same rows the store writes, built beforehand so the bare runs do no extra work.
+  const now = new Date().toISOString();
+  const currentRows = records.map((r) => {
+    const row: Record<string, unknown> = { id: r.id, revision: r.revision, updatedAt: r.updatedAt, outcome: outcomeOf(r), saveId: 'bench', record: r };
+    const cell = cellOf(r);
+    if (cell !== undefined) row['cell'] = cell;
+    return row;
+  });
+  const revisionRows = records.map((r) => ({ surveyId: r.id, revision: r.revision, savedAt: now, kind: 'import', conflictWith: null, tabId: null, record: r }));
+
+  // ——— put ———
+  const bareDb = await openBare(new IDBFactory());
+  const barePut = await time(async () => {
+    const tx = bareDb.transaction(['surveys', 'revisions'], 'readwrite');
+    const s = tx.objectStore('surveys');
+    const rv = tx.objectStore('revisions');
+    for (let i = 0; i < COUNT; i++) {
+      rv.add(revisionRows[i]);
+      s.put(currentRows[i]);
+    }
+    await txDone(tx);
+  });
+  const barePlain = await time(async () => {
+    const tx = bareDb.transaction('plain', 'readwrite');
+    const p = tx.objectStore('plain');
+    for (const r of records) p.put(r);
+    await txDone(tx);
+  });
+  const store = new SurveyStore({ indexedDB: new IDBFactory(), storage: null, broadcast: false, isInstalled: () => false });
+  const ourPut = await time(() => store.writeRevisions(records));
+  if (ourPut.value.revisionsWritten !== COUNT) throw new Error('not every record was written');
+
+  // ——— get all ———
+  const bareGet = await time(async () => {
+    const tx = bareDb.transaction('surveys', 'readonly');
+    const all = await req(tx.objectStore('surveys').getAll());
+    return all.length;
+  });
+  const ourGet = await time(() => store.listSurveys());
+  if (ourGet.value.length !== COUNT || bareGet.value !== COUNT) throw new Error('counts differ');
+
+  // ——— get by id ———
+  const ids = Array.from({ length: 10_000 }, () => (records[Math.floor(rand() * COUNT)] as SurveyRecord).id);
+  const bareById = await time(async () => {
+    for (const id of ids) {
+      const tx = bareDb.transaction('surveys', 'readonly');
+      await req(tx.objectStore('surveys').get(id));
+    }
+  });
+  const ourById = await time(async () => {
+    for (const id of ids) await store.getSurvey(id);
+  });
+
+  const rate = (n: number, ms: number) => `${Math.round((n / ms) * 1000).toLocaleString('en')}/s`;
+  const ratio = (ours: number, bare: number) => (ours / bare).toFixed(2);
+  const rows = [
+    ['put (revision + current, 1 tx)', rate(COUNT, ourPut.ms), rate(COUNT, barePut.ms), ratio(ourPut.ms, barePut.ms)],
+    ['get all (listSurveys vs getAll)', rate(COUNT, ourGet.ms), rate(COUNT, bareGet.ms), ratio(ourGet.ms, bareGet.ms)],
+    ['get by id (10,000 random)', rate(ids.length, ourById.ms), rate(ids.length, bareById.ms), ratio(ourById.ms, bareById.ms)],
+  ];
+  console.log('\nrecords per second (ours | bare IndexedDB | time ratio ours/bare, goal ≤ 1.5)');
+  for (const [name, ours, bare, r] of rows) {
+    console.log(`  ${name!.padEnd(34)} ${ours!.padStart(12)} | ${bare!.padStart(12)} | ${r}×${Number(r) <= GOAL ? '' : '  (above goal)'}`);
+  }
+  console.log(`  context: bare put into one store, no history: ${rate(COUNT, barePlain.ms)}`);
+  console.log(
+    '\nNode with fake-indexeddb, not a browser. Keystroke-to-durable-save latency (p50/p95 under\n' +
+      '4× CPU throttling) and the browser bulk figures need Chromium: phase two.',
+  );
+  store.close();
+  bareDb.close();
+}
+
+await main();
