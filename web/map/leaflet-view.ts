@@ -266,6 +266,13 @@ export function createMapView(container: HTMLElement, callbacks: MapViewCallback
     },
     setSelected(id) {
       if (id === selected) return;
+      // Keep the chosen marker in sight above the summary card (a bottom sheet on phones).
+      const point = id ? points.find((p) => p.id === id) : undefined;
+      if (point) {
+        const at = map.latLngToContainerPoint([point.lat, point.lon]);
+        const h = map.getSize().y;
+        if (at.y > h * 0.35) map.panBy([0, at.y - h * 0.25], { animate: true, duration: 0.3 });
+      }
       const before = selected;
       selected = id;
       for (const key of [before, id]) {
