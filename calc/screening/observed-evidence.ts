@@ -131,9 +131,12 @@ export function checklistEvidence(survey: SurveyInput, findings: Findings): Evid
       flag: rule.item === 'ground-failure' ? 'ground-failure' : null,
       text:
         `Seen (${severity}): ${rule.words}; ${rule.why} (at least ${DAMAGE_STATE_WORDS[state]}` +
-        (floor !== null ? `, and at least a ${floor === 'keep-out' ? 'keep-out' : 'limited-entry'} posting` : '') +
+        (floor !== null
+          ? `, and at least a ${floor === 'keep-out' ? 'keep-out' : 'limited-entry'} posting`
+          : '') +
         ').',
-      source: 'checklist table ours (common practice, no source), read against the Hazus W1/W2 damage-state descriptions',
+      source:
+        'checklist table ours (common practice, no source), read against the Hazus W1/W2 damage-state descriptions',
     });
   }
   // Most severe first, so the reasons read in order of weight.

@@ -240,7 +240,7 @@ export function rockingEvidence(
       out.predicted.push({
         id: `rocking.${id}.devices`,
         side: 'predicted',
-        kind: 'rocking',
+        kind: 'devices',
         label: 'Supplemental devices',
         where: `wall ${id}`,
         value: null,

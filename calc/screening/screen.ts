@@ -42,7 +42,7 @@ import {
   type ScreeningProbabilities,
   type ScreeningResult,
 } from './screening-result.js';
-import { fixed, percent, storeyName } from './text-format.js';
+import { fixed, storeyName } from './text-format.js';
 import { DAMAGE_STATE_WORDS, POSTING_WORDS } from './verdict-words.js';
 
 /** Options of {@link screen}. */
@@ -168,7 +168,8 @@ function plain(value: unknown, path: string, bad: string[]): unknown {
 }
 
 /** Key defaults: the ones that lower the confidence. */
-const KEY_DEFAULT = /^(period\.empirical|demand\.elf|storey\.partial|wall\.clt-typical|period\.measured-both)/;
+const KEY_DEFAULT =
+  /^(period\.empirical|demand\.elf|storey\.partial|wall\.clt-typical|period\.measured-both)/;
 /** Defaults worth listing (mass and load defaults included). */
 const ANY_DEFAULT = /default|typical|empirical|partial|measured-both|elf/;
 
@@ -198,11 +199,18 @@ function confidenceOf(
   } else if (missing.length > 0 || key.length > 0 || classDefaults.length > 0) {
     level = 'reduced';
     const parts: string[] = [];
-    if (missing.length > 0) parts.push(`${missing.length} input(s) missing or unusable`);
-    if (classDefaults.length + key.length > 0) {
-      parts.push(`${classDefaults.length + key.length} key default(s)`);
+    const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+    if (missing.length > 0) {
+      parts.push(`${plural(missing.length, 'input', 'inputs')} missing or unusable`);
     }
-    statement = `Confidence reduced: ${parts.join(' and ')}; the fragility β was widened by ${fixed(addedBeta, 2)} (SRSS).`;
+    if (classDefaults.length + key.length > 0) {
+      parts.push(plural(classDefaults.length + key.length, 'key default', 'key defaults'));
+    }
+    statement = `Confidence reduced: ${parts.join(' and ')}`;
+    statement +=
+      addedBeta > 0
+        ? `; the fragility dispersion β was widened by ${fixed(addedBeta, 2)} (SRSS).`
+        : '.';
   } else {
     level = 'normal';
     statement =
@@ -211,7 +219,8 @@ function confidenceOf(
   if (missing.length > 0) {
     statement += ` Missing or unusable: ${missingText.slice(0, 5).join('; ')}${missing.length > 5 ? `; and ${missing.length - 5} more` : ''}.`;
   }
-  if (classDefaults.length + key.length > 0) statement += ` ${[...classDefaults, ...key].join(' ')}`;
+  if (classDefaults.length + key.length > 0)
+    statement += ` ${[...classDefaults, ...key].join(' ')}`;
   return { level, statement, missing: missingText, defaulted, addedBeta };
 }
 
@@ -246,7 +255,12 @@ const FLAG_INTRO: Record<ScreeningFlagId, string> = {
  *   programmer error, not a missing input.
  */
 export function screen(survey: SurveyInput, options: ScreenOptions = {}): ScreeningResult {
-  if (survey === null || typeof survey !== 'object' || survey.building === null || typeof survey.building !== 'object') {
+  if (
+    survey === null ||
+    typeof survey !== 'object' ||
+    survey.building === null ||
+    typeof survey.building !== 'object'
+  ) {
     throw new RangeError(`survey must be a SurveyInput with a building, got ${String(survey)}`);
   }
   const findings = new Findings();
@@ -316,7 +330,9 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
 
   // Governing state.
   const predictedPossible =
-    fragility.drift !== null || fragility.spectral !== null || rocking.predicted.some((i) => i.value !== null);
+    fragility.drift !== null ||
+    fragility.spectral !== null ||
+    rocking.predicted.some((i) => i.value !== null);
   const predictedState: DamageState | null = predictedPossible
     ? worstDamageState(predicted.map((i) => i.state))
     : null;
@@ -347,7 +363,9 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   for (const item of all) {
     if (item.postingFloor === null) continue;
     if (postingRank(item.postingFloor) > postingRank(level)) {
-      postingReasons.push(`${item.label} (${item.valueText}): at least ${POSTING_WORDS[item.postingFloor].word.toLowerCase()}.`);
+      postingReasons.push(
+        `${item.label} (${item.valueText}): at least ${POSTING_WORDS[item.postingFloor].word.toLowerCase()}.`,
+      );
     }
     level = stricterPosting(level, item.postingFloor);
   }
@@ -360,7 +378,10 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
     flagReasons.set(id, list);
   };
   if (damageStateRank(state) >= damageStateRank('extensive')) {
-    raise('extensive-damage', `${WORDS[state]} damage: repair, shoring or demolition is for an engineer to decide.`);
+    raise(
+      'extensive-damage',
+      `${WORDS[state]} damage: repair, shoring or demolition is for an engineer to decide.`,
+    );
   }
   for (const item of all) if (item.flag !== null) raise(item.flag, item.text);
   const flags: ScreeningFlag[] = SCREENING_FLAGS.filter((id) => flagReasons.has(id)).map((id) => ({
@@ -406,9 +427,13 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
       `More was seen (${WORDS[observedState]}) than the hazard predicts (${WORDS[predictedState]}): the shaking at the site or the building may differ from the inputs.`,
     );
   }
-  reasons.push(`Posting ${POSTING_WORDS[level].symbol} ${POSTING_WORDS[level].word}: ${postingReasons.join(' ')}`);
+  reasons.push(
+    `Posting ${POSTING_WORDS[level].symbol} ${POSTING_WORDS[level].word}: ${postingReasons.join(' ')}`,
+  );
   for (const f of flags) {
-    reasons.push(`Detailed assessment (${FLAG_INTRO[f.id].toLowerCase()}): ${f.reasons[0]}${f.reasons.length > 1 ? ` (and ${f.reasons.length - 1} more)` : ''}`);
+    reasons.push(
+      `Detailed assessment (${FLAG_INTRO[f.id].toLowerCase()}): ${f.reasons[0]}${f.reasons.length > 1 ? ` (and ${f.reasons.length - 1} more)` : ''}`,
+    );
   }
 
   // Assumptions, missing inputs, confidence.
@@ -432,7 +457,8 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
     rockingDefaults,
     addedBeta,
   );
-  if (confidence.level !== 'normal') reasons.push(confidence.statement.split(' Missing or unusable:')[0] as string);
+  if (confidence.level !== 'normal')
+    reasons.push(confidence.statement.split(' Missing or unusable:')[0] as string);
 
   const cautions = [VERDICT_CAUTION, FRAGILITY_CAUTION, POSTING_CAUTION];
   for (const c of rocking.cautions) if (!cautions.includes(c)) cautions.push(c);
@@ -471,7 +497,9 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
       periodKind: { x: dirs[0].periodKind, y: dirs[1].periodKind },
       governingDemandToCapacity: dc?.maxDemandToCapacity ?? null,
       governingDemandToCapacityAt:
-        dc === undefined ? null : `${storeyName(dc.maxDemandToCapacityStorey ?? 0)}, along ${dc.direction}`,
+        dc === undefined
+          ? null
+          : `${storeyName(dc.maxDemandToCapacityStorey ?? 0)}, along ${dc.direction}`,
       peakDriftRatio: peak,
     },
     rockingWalls: rocking.walls,
@@ -492,5 +520,3 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   }
   return clean;
 }
-
-export { percent as formatPercent };
