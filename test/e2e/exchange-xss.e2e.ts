@@ -172,6 +172,7 @@ describe('imported text is never run as HTML', () => {
     const words = await page.locator('.gl-map-side.is-open .gl-facet__word').allTextContents();
     for (const r of records) expect(words).toContain(r.inspector);
     await closePanel(page);
+    await page.getByRole('button', { name: 'Close the summary' }).click();
     await page.getByRole('button', { name: /^Without location/ }).click();
     const listed = await page.locator('.gl-unplaced__list a').allTextContents();
     expect(listed.length).toBe(records.filter((r) => r.location === null).length);

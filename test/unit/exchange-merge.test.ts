@@ -56,6 +56,16 @@ describe('merge plan', () => {
     expect(plan.revisions).toEqual([]);
   });
 
+  it('does not take a survey exported twice from one device for a conflict (lastExportedAt)', () => {
+    const [r] = makeTown(1, { seed: 8 }) as [SurveyRecord];
+    const markedOnDevice = { ...r, lastExportedAt: '2031-05-14T18:00:00.000Z' };
+    const plan = planMerge([r], held(markedOnDevice));
+    expect(plan.conflicts).toEqual([]);
+    expect(plan.duplicates).toBe(1);
+    // Any other difference is still a conflict.
+    expect(planMerge([{ ...r, team: 'other' }], held(markedOnDevice)).conflicts).toHaveLength(1);
+  });
+
   it('keeps every revision of a survey, and makes the newest current', () => {
     const [base] = makeTown(1, { seed: 4 }) as [SurveyRecord];
     const r3 = rev(base, 3, { address: 'third' });

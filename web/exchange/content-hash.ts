@@ -34,3 +34,26 @@ export function contentHash(value: unknown): number {
 export function sameContent(a: unknown, b: unknown): boolean {
   return canonicalJson(a) === canonicalJson(b);
 }
+
+/**
+ * A survey's content for merging: the record without `lastExportedAt`, which is device
+ * bookkeeping set when a file is exported (storage writes no revision for it). Without
+ * this, a survey exported twice from the same device would look like a conflict.
+ */
+function mergeContent<T extends { lastExportedAt?: unknown }>(record: T): T {
+  // Spread defines own keys as data properties, so no key is lost; nested values are shared.
+  return { ...record, lastExportedAt: null };
+}
+
+/** The fingerprint of a survey's content for merging (see `mergeContent`). */
+export function surveyContentHash(record: { lastExportedAt?: unknown }): number {
+  return contentHash(mergeContent(record));
+}
+
+/** True when two revisions of a survey hold the same content for merging. */
+export function sameSurveyContent(
+  a: { lastExportedAt?: unknown },
+  b: { lastExportedAt?: unknown },
+): boolean {
+  return sameContent(mergeContent(a), mergeContent(b));
+}

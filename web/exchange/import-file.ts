@@ -19,7 +19,7 @@
 import { unzipSync } from 'fflate';
 import type { SurveyRecord } from '../../forms/index.js';
 import { t } from '../i18n/index.js';
-import { sameContent } from './content-hash.js';
+import { sameSurveyContent } from './content-hash.js';
 import { addConflictFlags, type ExchangeStore } from './exchange-store.js';
 import { readExchangeText, type RejectedFeature } from './geojson-import.js';
 import { planMerge, type ExistingSurvey } from './merge-plan.js';
@@ -81,7 +81,8 @@ async function lookupExisting(
   for (const r of incoming) {
     const held = current.get(r.id);
     // Only a record that is not simply the current one again needs the survey's history.
-    if (held && (held.revision !== r.revision || !sameContent(held, r))) needHistory.add(r.id);
+    if (held && (held.revision !== r.revision || !sameSurveyContent(held, r)))
+      needHistory.add(r.id);
   }
   const out = new Map<string, ExistingSurvey>();
   for (const r of incoming) {
@@ -97,7 +98,10 @@ async function lookupExisting(
     for (const row of rows) {
       const slot = revisions.find((x) => x.revision === row.revision);
       if (!slot) revisions.push(row.record);
-      else if (!sameContent(slot, row.record) && !conflicts.some((c) => sameContent(c, row.record)))
+      else if (
+        !sameSurveyContent(slot, row.record) &&
+        !conflicts.some((c) => sameSurveyContent(c, row.record))
+      )
         conflicts.push(row.record);
     }
     out.set(r.id, { revisions, conflicts });

@@ -3,6 +3,7 @@
  * skipped, conflicts kept (each named), and every refused Feature with its reasons. All
  * imported text (addresses, ids, inspectors) is rendered as text, never as markup.
  */
+import { useEffect, useRef } from 'preact/hooks';
 import { t } from '../i18n/index.js';
 import type { ImportReport } from './import-file.js';
 
@@ -10,9 +11,14 @@ import type { ImportReport } from './import-file.js';
 const MAX_LISTED = 200;
 
 export function ImportReportView({ report }: { report: ImportReport }) {
+  const box = useRef<HTMLDivElement>(null);
+  // The report appears below the buttons: bring it into view, or it goes unseen on a phone.
+  useEffect(() => {
+    box.current?.scrollIntoView?.({ block: 'start', behavior: 'smooth' });
+  }, [report]);
   if (report.status === 'refused') {
     return (
-      <div class="gl-report gl-report--error" role="alert">
+      <div ref={box} class="gl-report gl-report--error" role="alert">
         <p class="gl-report__title">{t('exchange.import.refused', { file: report.fileName })}</p>
         <p>{report.reason}</p>
         <p class="muted">{t('exchange.import.untouched')}</p>
@@ -50,7 +56,7 @@ export function ImportReportView({ report }: { report: ImportReport }) {
 
   if (report.status === 'refused-strict') {
     return (
-      <div class="gl-report gl-report--error" role="alert">
+      <div ref={box} class="gl-report gl-report--error" role="alert">
         <p class="gl-report__title">
           {t('exchange.import.strictRefused', { file: report.fileName, bad: rejected.length })}
         </p>
@@ -61,7 +67,7 @@ export function ImportReportView({ report }: { report: ImportReport }) {
   }
   if (report.status === 'failed') {
     return (
-      <div class="gl-report gl-report--error" role="alert">
+      <div ref={box} class="gl-report gl-report--error" role="alert">
         <p class="gl-report__title">{t('exchange.import.failed', { file: report.fileName })}</p>
         <p>{report.reason}</p>
         <p class="muted">{t('exchange.import.untouched')}</p>
@@ -70,17 +76,15 @@ export function ImportReportView({ report }: { report: ImportReport }) {
     );
   }
   return (
-    <div class="gl-report" role="status">
+    <div ref={box} class="gl-report" role="status">
       <p class="gl-report__title">{t('exchange.import.done', { file: report.fileName })}</p>
       <ul class="gl-report__counts">
         <li>{t('exchange.import.accepted', { count: report.accepted })}</li>
         <li>{t('exchange.import.newSurveys', { count: report.newSurveys })}</li>
-        <li>
-          {t('exchange.import.newRevisions', {
-            count: report.newRevisions,
-            current: report.newerCurrent,
-          })}
-        </li>
+        <li>{t('exchange.import.newRevisions', { count: report.newRevisions })}</li>
+        {report.newerCurrent > 0 ? (
+          <li>{t('exchange.import.newerCurrent', { count: report.newerCurrent })}</li>
+        ) : null}
         <li>{t('exchange.import.duplicates', { count: report.duplicates })}</li>
         {report.migrated > 0 ? (
           <li>{t('exchange.import.migrated', { count: report.migrated })}</li>

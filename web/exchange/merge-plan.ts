@@ -6,6 +6,7 @@
  *   becomes its newest revision (highest number); older revisions fill in its history.
  * - A revision the device already holds with the same content is a duplicate, and skipped
  *   (so importing the same file twice, or two files that share surveys, adds nothing).
+ *   `lastExportedAt` is bookkeeping of the exporting device, not content: it is ignored.
  * - A revision the device holds with different content is a conflict: two inspectors'
  *   devices both wrote revision n. Neither is thrown away. The one already on the device (or
  *   first in the file) keeps the revision slot; the other is kept beside it as a conflict
@@ -16,7 +17,7 @@
  * writes it in one transaction.
  */
 import type { SurveyRecord } from '../../forms/index.js';
-import { contentHash, sameContent } from './content-hash.js';
+import { sameSurveyContent, surveyContentHash } from './content-hash.js';
 
 /** What the device holds for one survey id. */
 export interface ExistingSurvey {
@@ -60,11 +61,11 @@ interface IdState {
 }
 
 function slot(record: SurveyRecord): Slot {
-  return { record, hash: contentHash(record) };
+  return { record, hash: surveyContentHash(record) };
 }
 
 function sameSlot(a: Slot, b: Slot): boolean {
-  return a.hash === b.hash && sameContent(a.record, b.record);
+  return a.hash === b.hash && sameSurveyContent(a.record, b.record);
 }
 
 /** Plans the merge of `incoming` (in file order) into what the device holds. */

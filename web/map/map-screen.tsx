@@ -357,7 +357,7 @@ export function MapScreen() {
               {tileNote}
             </p>
           ) : null}
-          {data && data.unplaced.length > 0 ? (
+          {data && data.unplaced.length > 0 && !selected ? (
             <button type="button" class="gl-unplaced-button" onClick={() => setPanel('unplaced')}>
               {t('map.unplaced.button', { count: unplacedShown.length })}
             </button>

@@ -57,8 +57,8 @@ export const map = {
   'exchange.import.done': 'Imported {file}.',
   'exchange.import.accepted': 'Valid surveys in the file: {count}',
   'exchange.import.newSurveys': 'New surveys: {count}',
-  'exchange.import.newRevisions':
-    'Revisions added: {count} (surveys now at a newer revision: {current})',
+  'exchange.import.newRevisions': 'Revisions added: {count}',
+  'exchange.import.newerCurrent': 'Surveys updated to a newer revision: {count}',
   'exchange.import.duplicates': 'Already on this device, skipped: {count}',
   'exchange.import.migrated': 'Written by an earlier version and updated on import: {count}',
   'exchange.import.withoutLocation': 'Without a location (listed beside the map): {count}',
