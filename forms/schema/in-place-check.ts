@@ -40,7 +40,8 @@ function defOf(schema: unknown): Def {
 }
 
 function patternCheck(pattern: unknown): Check {
-  if (!(pattern instanceof RegExp)) throw new UnsupportedSchemaError('string format without a pattern');
+  if (!(pattern instanceof RegExp))
+    throw new UnsupportedSchemaError('string format without a pattern');
   if (pattern.global || pattern.sticky) throw new UnsupportedSchemaError('stateful pattern');
   return (v) => pattern.test(v as string);
 }
@@ -67,9 +68,13 @@ function numberChecks(def: Def): Check[] {
     const value = c.value as number;
     switch (c.check) {
       case 'greater_than':
-        return c.inclusive ? (v: unknown) => (v as number) >= value : (v: unknown) => (v as number) > value;
+        return c.inclusive
+          ? (v: unknown) => (v as number) >= value
+          : (v: unknown) => (v as number) > value;
       case 'less_than':
-        return c.inclusive ? (v: unknown) => (v as number) <= value : (v: unknown) => (v as number) < value;
+        return c.inclusive
+          ? (v: unknown) => (v as number) <= value
+          : (v: unknown) => (v as number) < value;
       case 'number_format':
         if (c.format !== 'safeint') throw new UnsupportedSchemaError(`number format ${c.format}`);
         return (v: unknown) => Number.isSafeInteger(v);

@@ -239,7 +239,8 @@ function parseUnguarded(raw: unknown, catalogue: MessageCatalogue): StoredParseR
     };
   }
   // Current records are by far the most common: a fast in-place check, no copy.
-  if (version === SCHEMA_VERSION && isSurveyRecord(raw)) return { ok: true, record: raw, fromVersion: version };
+  if (version === SCHEMA_VERSION && isSurveyRecord(raw))
+    return { ok: true, record: raw, fromVersion: version };
   let value: unknown = raw;
   for (let v = version; v < SCHEMA_VERSION; v++) {
     const step = steps[v];

@@ -29,7 +29,12 @@ describe('in-place record check', () => {
 
   it('agrees with zod on the version 1 schema', () => {
     const v1check = compileInPlaceCheck(surveyRecordV1Schema);
-    const variants: unknown[] = [v1, { ...v1, lat: 'x' }, { ...v1, extra: 1 }, { ...v1, photos: [{}] }];
+    const variants: unknown[] = [
+      v1,
+      { ...v1, lat: 'x' },
+      { ...v1, extra: 1 },
+      { ...v1, photos: [{}] },
+    ];
     for (const v of variants) expect(v1check?.(v)).toBe(surveyRecordV1Schema.safeParse(v).success);
   });
 
@@ -38,11 +43,29 @@ describe('in-place record check', () => {
       [z.number().gt(0).max(5), [0, -0, 1e-300, 5, 5.000001, NaN, Infinity, '1', null]],
       [z.number().int().min(0), [0, 1, 1.5, -1, 2 ** 53, 2 ** 53 - 1, -0]],
       [z.string().min(1).max(3), ['', 'a', 'abc', 'abcd', 5]],
-      [z.uuid(), ['00000000-0000-4000-8000-000000000000', 'x', '00000000-0000-4000-c000-000000000000']],
-      [z.iso.datetime(), ['2024-02-29T00:00:00Z', '2023-02-29T00:00:00Z', '2024-01-01T00:00:00.123Z', '2024-01-01']],
-      [z.array(z.number()).max(2), [[], [1, 2], [1, 2, 3], [1, undefined], [, 1]]],
-      [z.strictObject({ a: z.number().optional() }), [{}, { a: undefined }, { a: 1 }, { b: 1 }, JSON.parse('{"__proto__": 1}'), null, []]],
-      [z.discriminatedUnion('k', [z.strictObject({ k: z.literal('a') }), z.strictObject({ k: z.literal('b'), n: z.number() })]), [{ k: 'a' }, { k: 'b' }, { k: 'b', n: 1 }, { k: 'c' }]],
+      [
+        z.uuid(),
+        ['00000000-0000-4000-8000-000000000000', 'x', '00000000-0000-4000-c000-000000000000'],
+      ],
+      [
+        z.iso.datetime(),
+        ['2024-02-29T00:00:00Z', '2023-02-29T00:00:00Z', '2024-01-01T00:00:00.123Z', '2024-01-01'],
+      ],
+      [
+        z.array(z.number()).max(2),
+        [[], [1, 2], [1, 2, 3], [1, undefined], new Array<number>(2).fill(1, 1)],
+      ],
+      [
+        z.strictObject({ a: z.number().optional() }),
+        [{}, { a: undefined }, { a: 1 }, { b: 1 }, JSON.parse('{"__proto__": 1}'), null, []],
+      ],
+      [
+        z.discriminatedUnion('k', [
+          z.strictObject({ k: z.literal('a') }),
+          z.strictObject({ k: z.literal('b'), n: z.number() }),
+        ]),
+        [{ k: 'a' }, { k: 'b' }, { k: 'b', n: 1 }, { k: 'c' }],
+      ],
     ];
     for (const [schema, values] of cases) {
       const c = compileInPlaceCheck(schema);

@@ -35,13 +35,17 @@ describe('geohash cells for the location index', () => {
 
   it('throws with the bad value for positions off the globe or bad precision', () => {
     expect(() => encodeGeohash(91, 0)).toThrow('lat must be a finite number in [-90, 90], got 91');
-    expect(() => encodeGeohash(0, NaN)).toThrow('lon must be a finite number in [-180, 180], got NaN');
+    expect(() => encodeGeohash(0, NaN)).toThrow(
+      'lon must be a finite number in [-180, 180], got NaN',
+    );
     expect(() => encodeGeohash(0, 0, 0)).toThrow('precision must be an integer in [1, 12], got 0');
     expect(() => decodeGeohash('ab!')).toThrow('not a geohash character: "a" in "ab!"');
   });
 
   it('gives a record without a location no cell (so the index leaves it out)', () => {
     expect(cellOf({ location: null })).toBeUndefined();
-    expect(cellOf({ location: { lat: 42.6, lon: -5.6, accuracyM: null, source: 'map' } })?.slice(0, 5)).toBe('ezs42');
+    expect(
+      cellOf({ location: { lat: 42.6, lon: -5.6, accuracyM: null, source: 'map' } })?.slice(0, 5),
+    ).toBe('ezs42');
   });
 });

@@ -22,7 +22,10 @@ import {
  * APP1 laid out per EXIF 2.32 / TIFF 6.0: IFD0 with Orientation (0x0112) and, optionally,
  * a GPS IFD pointer (0x8825).
  */
-function jpeg(options: { exif?: { little: boolean; orientation: number; gps: boolean } | null; jfif?: boolean }) {
+function jpeg(options: {
+  exif?: { little: boolean; orientation: number; gps: boolean } | null;
+  jfif?: boolean;
+}) {
   const bytes: number[] = [0xff, 0xd8];
   if (options.jfif !== false) {
     bytes.push(0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 1, 1, 0, 0, 1, 0, 1, 0, 0);
@@ -38,12 +41,20 @@ function jpeg(options: { exif?: { little: boolean; orientation: number; gps: boo
 function exifSegment(o: { little: boolean; orientation: number; gps: boolean }): number[] {
   const u16 = (v: number) => (o.little ? [v & 0xff, v >> 8] : [v >> 8, v & 0xff]);
   const u32 = (v: number) =>
-    o.little ? [v & 0xff, (v >> 8) & 0xff, (v >> 16) & 0xff, v >>> 24] : [v >>> 24, (v >> 16) & 0xff, (v >> 8) & 0xff, v & 0xff];
+    o.little
+      ? [v & 0xff, (v >> 8) & 0xff, (v >> 16) & 0xff, v >>> 24]
+      : [v >>> 24, (v >> 16) & 0xff, (v >> 8) & 0xff, v & 0xff];
   const entries: number[][] = [[...u16(0x0112), ...u16(3), ...u32(1), ...u16(o.orientation), 0, 0]];
   if (o.gps) entries.push([...u16(0x8825), ...u16(4), ...u32(1), ...u32(8 + 2 + 12 * 2 + 4)]);
   const ifd = [...u16(entries.length), ...entries.flat(), ...u32(0)];
   const gpsIfd = o.gps ? [...u16(0), ...u32(0)] : [];
-  const tiff = [...(o.little ? [0x49, 0x49] : [0x4d, 0x4d]), ...u16(42), ...u32(8), ...ifd, ...gpsIfd];
+  const tiff = [
+    ...(o.little ? [0x49, 0x49] : [0x4d, 0x4d]),
+    ...u16(42),
+    ...u32(8),
+    ...ifd,
+    ...gpsIfd,
+  ];
   const body = [0x45, 0x78, 0x69, 0x66, 0x00, 0x00, ...tiff];
   const length = body.length + 2;
   return [0xff, 0xe1, length >> 8, length & 0xff, ...body];
@@ -77,7 +88,9 @@ describe('EXIF in JPEG bytes', () => {
     });
 
     it(`resets the orientation to upright without touching anything else (${order})`, () => {
-      const exif = findExifSegment(jpeg({ exif: { little, orientation: 8, gps: true } })) as Uint8Array;
+      const exif = findExifSegment(
+        jpeg({ exif: { little, orientation: 8, gps: true } }),
+      ) as Uint8Array;
       const upright = withUprightOrientation(exif);
       expect(exifOrientation(upright)).toBe(1);
       expect(exifOrientation(exif)).toBe(8); // the argument is not changed
@@ -97,7 +110,10 @@ describe('EXIF in JPEG bytes', () => {
   it('puts a kept EXIF block after the JFIF header of a re-encoded JPEG', () => {
     const original = jpeg({ exif: { little: false, orientation: 3, gps: true } });
     const reencoded = jpeg({ exif: null });
-    const kept = insertExif(reencoded, withUprightOrientation(findExifSegment(original) as Uint8Array));
+    const kept = insertExif(
+      reencoded,
+      withUprightOrientation(findExifSegment(original) as Uint8Array),
+    );
     expect(kept).not.toBeNull();
     const exif = findExifSegment(kept as Uint8Array) as Uint8Array;
     expect(exifHasGps(exif)).toBe(true);
@@ -112,7 +128,11 @@ describe('EXIF in JPEG bytes', () => {
     const good = jpeg({ exif: { little: true, orientation: 6, gps: true } });
     fc.assert(
       fc.property(fc.uint8Array({ maxLength: 200 }), fc.nat({ max: good.length }), (junk, cut) => {
-        for (const bytes of [junk, good.slice(0, cut), new Uint8Array([...good.slice(0, cut), ...junk])]) {
+        for (const bytes of [
+          junk,
+          good.slice(0, cut),
+          new Uint8Array([...good.slice(0, cut), ...junk]),
+        ]) {
           const exif = findExifSegment(bytes);
           if (exif !== null) {
             exifHasGps(exif);
@@ -129,16 +149,31 @@ describe('EXIF in JPEG bytes', () => {
 
 describe('photo metadata and storage', () => {
   it('makes a metadata entry the record schema accepts', () => {
-    const meta = photoMetaFor(crypto.randomUUID(), { keptLocation: true }, new Date('2025-03-01T10:00:00Z'), 'Hold-down, north-east');
+    const meta = photoMetaFor(
+      crypto.randomUUID(),
+      { keptLocation: true },
+      new Date('2025-03-01T10:00:00Z'),
+      'Hold-down, north-east',
+    );
     expect(photoMetaSchema.safeParse(meta).success).toBe(true);
     expect(meta).toMatchObject({ takenAt: '2025-03-01T10:00:00.000Z', keptLocation: true });
   });
 
   it('stores the Blob first and returns the metadata for the record', async () => {
-    const store = new SurveyStore({ indexedDB: new IDBFactory(), storage: null, broadcast: false, isInstalled: () => false });
+    const store = new SurveyStore({
+      indexedDB: new IDBFactory(),
+      storage: null,
+      broadcast: false,
+      isInstalled: () => false,
+    });
     try {
       const blob = new Blob([jpeg({ exif: null })], { type: 'image/jpeg' });
-      const meta = await savePhoto(store, 'survey-1', { blob, width: 1, height: 1, keptLocation: false }, { takenAt: null, caption: '' });
+      const meta = await savePhoto(
+        store,
+        'survey-1',
+        { blob, width: 1, height: 1, keptLocation: false },
+        { takenAt: null, caption: '' },
+      );
       const row = await store.getPhoto(meta.id);
       expect(row).toMatchObject({ surveyId: 'survey-1', bytes: blob.size, type: 'image/jpeg' });
       expect(findExifSegment(new Uint8Array(await (row?.blob as Blob).arrayBuffer()))).toBeNull();

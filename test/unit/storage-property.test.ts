@@ -7,28 +7,36 @@ import { SurveyStore } from '../../web/storage/index.js';
 import { brokenRecordArb, garbageArb, surveyRecordArb } from '../fixtures/records/arbitrary.js';
 
 function makeStore(): SurveyStore {
-  return new SurveyStore({ indexedDB: new IDBFactory(), storage: null, isInstalled: () => false, broadcast: false });
+  return new SurveyStore({
+    indexedDB: new IDBFactory(),
+    storage: null,
+    isInstalled: () => false,
+    broadcast: false,
+  });
 }
 
 describe('property: storage round trip', () => {
   it('stores random valid records and reads them back unchanged, current and revisions', async () => {
     await fc.assert(
-      fc.asyncProperty(fc.uniqueArray(surveyRecordArb, { maxLength: 5, selector: (r) => r.id }), async (records) => {
-        const store = makeStore();
-        try {
-          await store.writeRevisions(records);
-          for (const r of records) {
-            expect(await store.getSurvey(r.id)).toEqual(r);
-            const revs = await store.getRevisions(r.id);
-            expect(revs.map((e) => e.record)).toEqual([r]);
+      fc.asyncProperty(
+        fc.uniqueArray(surveyRecordArb, { maxLength: 5, selector: (r) => r.id }),
+        async (records) => {
+          const store = makeStore();
+          try {
+            await store.writeRevisions(records);
+            for (const r of records) {
+              expect(await store.getSurvey(r.id)).toEqual(r);
+              const revs = await store.getRevisions(r.id);
+              expect(revs.map((e) => e.record)).toEqual([r]);
+            }
+            const listed = await store.listSurveys();
+            expect(listed).toHaveLength(records.length);
+            expect(await store.countQuarantined()).toBe(0);
+          } finally {
+            store.close();
           }
-          const listed = await store.listSurveys();
-          expect(listed).toHaveLength(records.length);
-          expect(await store.countQuarantined()).toBe(0);
-        } finally {
-          store.close();
-        }
-      }),
+        },
+      ),
       { numRuns: 60 },
     );
   });
@@ -40,7 +48,11 @@ describe('property: storage round trip', () => {
         try {
           const outcome = await store.saveDraft(record, { baseRevision: 0 });
           if (outcome.status !== 'saved') throw new Error('conflict on an empty store');
-          expect(outcome.record).toEqual({ ...record, revision: 1, updatedAt: outcome.record.updatedAt });
+          expect(outcome.record).toEqual({
+            ...record,
+            revision: 1,
+            updatedAt: outcome.record.updatedAt,
+          });
           expect(await store.getSurvey(record.id)).toEqual(outcome.record);
         } finally {
           store.close();
@@ -75,7 +87,11 @@ describe('property: garbage never corrupts good records', () => {
             const invalid = rows.filter((row) => {
               const rec = (row as { record?: unknown }).record;
               const v = validateRecord(rec);
-              return !(v.ok && v.record.id === row.id && (row as { revision?: unknown }).revision === v.record.revision);
+              return !(
+                v.ok &&
+                v.record.id === row.id &&
+                (row as { revision?: unknown }).revision === v.record.revision
+              );
             });
             const tx = db.transaction('surveys', 'readwrite');
             for (const row of rows) await tx.store.put(row as never);
@@ -86,9 +102,11 @@ describe('property: garbage never corrupts good records', () => {
             expect(listed).toHaveLength(good.length + rows.length - invalid.length);
             const q = await store.listQuarantined();
             expect(q).toHaveLength(invalid.length);
-            for (const row of invalid) expect(q.find((e) => e.sourceKey === row.id)?.raw).toEqual(row);
+            for (const row of invalid)
+              expect(q.find((e) => e.sourceKey === row.id)?.raw).toEqual(row);
             // And the good ones' history is untouched.
-            for (const g of good) expect((await store.getRevisions(g.id)).map((e) => e.record)).toEqual([g]);
+            for (const g of good)
+              expect((await store.getRevisions(g.id)).map((e) => e.record)).toEqual([g]);
           } finally {
             store.close();
           }
