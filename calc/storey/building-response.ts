@@ -15,7 +15,11 @@ import { storeyIrregularities, type StoreyIrregularity } from './storey-irregula
 import { storeyLateral, type StoreyLateral } from './storey-lateral.js';
 import { storeyMasses, type StoreyMass } from './storey-masses.js';
 import { torsionalEccentricity } from './torsional-eccentricity.js';
-import { wallContribution, type WallContribution } from './wall-contribution.js';
+import {
+  noteWallAssumptions,
+  wallContribution,
+  type WallContribution,
+} from './wall-contribution.js';
 
 /** Module-local alias: read once, not through an import binding in hot loops. */
 const PLAUSIBLE = PLAUSIBLE_RANGES;
@@ -70,6 +74,9 @@ export interface BuildingResponse {
   missingInputs: MissingInput[];
 }
 
+/** Text of the default-damping assumption (built once). */
+const DAMPING_TEXT = `Spectrum ordinates at ${100 * REFERENCE_DAMPING} % viscous damping.`;
+
 /** The hazard checked and resolved once, or null (listed) when absent or unusable. */
 function checkHazard(
   hazard: SpectrumSpec | null,
@@ -83,7 +90,8 @@ function checkHazard(
     return null;
   }
   const [, hi] = PLAUSIBLE.hazardValue;
-  for (const [key, value] of Object.entries(hazard)) {
+  for (const key in hazard) {
+    const value: unknown = (hazard as unknown as Record<string, unknown>)[key];
     if (typeof value === 'number' && value > hi) {
       findings.invalid(
         `hazard.${key}`,
@@ -122,7 +130,6 @@ interface Shared {
 function directionResponse(direction: Direction, s: Shared): DirectionResponse {
   const { findings } = s;
   const n = s.masses.length;
-  const storeys = storeyLateral(n, direction, s.contributions, findings);
   const walls: WallContribution[] = [];
   let hasWalls = false;
   for (const c of s.contributions) {
@@ -130,6 +137,7 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
     walls.push(c);
     if (c.treatment === 'shear-wall') hasWalls = true;
   }
+  const storeys = storeyLateral(n, direction, walls, s.survey.walls, findings);
   const stiffness: (number | null)[] = new Array<number | null>(n);
   const strength: (number | null)[] = new Array<number | null>(n);
   let zero = -1; // first storey without stiffness > 0
@@ -249,7 +257,7 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
   }
 
   const plan = direction === 'x' ? s.survey.building.planYM : s.survey.building.planXM;
-  const ecc = torsionalEccentricity(n, direction, s.contributions, s.survey.walls, plan);
+  const ecc = torsionalEccentricity(storeys, plan);
   if (hasWalls) {
     const planField = direction === 'x' ? 'building.planYM' : 'building.planXM';
     if (plan === null) {
@@ -356,7 +364,7 @@ export function buildingResponse(survey: SurveyInput): BuildingResponse {
   if (checked !== null && checked.spec.damping === undefined) {
     findings.assume(
       'demand.damping',
-      `Spectrum ordinates at ${100 * REFERENCE_DAMPING} % viscous damping.`,
+      DAMPING_TEXT,
       'reference damping of EN 1998-1:2004 §3.2.2.2 and ASCE 7-16 §11.4.6',
     );
   }
@@ -399,7 +407,11 @@ export function buildingResponse(survey: SurveyInput): BuildingResponse {
       'no walls entered: empirical period only; storey stiffness and strength unknown',
     );
   }
-  const contributions = wallsIn.map((w, i) => wallContribution(w, i, heights, findings));
+  const contributions: WallContribution[] = [];
+  for (let i = 0; i < wallsIn.length; i++) {
+    contributions.push(wallContribution(wallsIn[i]!, i, heights, findings));
+  }
+  noteWallAssumptions(contributions, findings);
   findings.assume(
     'demand.elastic',
     'Demand is elastic (no behaviour factor q or R) and capacity is nominal wall strength: a demand-to-capacity ratio above 1 means yielding is expected, not necessarily failure.',

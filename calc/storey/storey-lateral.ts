@@ -1,6 +1,10 @@
-import type { Direction } from '../survey/survey-input.js';
+import type { Direction, WallInput } from '../survey/survey-input.js';
 import { Findings } from './findings.js';
+import { PLAUSIBLE as PLAUSIBLE_RANGES, plausible } from './plausible-ranges.js';
 import type { WallContribution } from './wall-contribution.js';
+
+/** Module-local alias: read once, not through an import binding in hot loops. */
+const PLAUSIBLE = PLAUSIBLE_RANGES;
 
 /** Lateral stiffness and strength of one storey in one direction. */
 export interface StoreyLateral {
@@ -17,6 +21,12 @@ export interface StoreyLateral {
   complete: boolean;
   /** Distinct sources of the values summed. */
   sources: string[];
+  /**
+   * Centre of rigidity Σki·pi / Σki of the shear walls, as a plan coordinate perpendicular
+   * to the direction (y for walls along x), in m; null when a wall lacks a position or the
+   * stiffness is not > 0.
+   */
+  centreOfRigidityM: number | null;
 }
 
 /**
@@ -29,6 +39,7 @@ export function storeyLateral(
   storeyCount: number,
   direction: Direction,
   walls: readonly WallContribution[],
+  surveyWalls: readonly WallInput[],
   findings: Findings,
 ): StoreyLateral[] {
   const out: StoreyLateral[] = new Array<StoreyLateral>(storeyCount);
@@ -41,11 +52,15 @@ export function storeyLateral(
       rockingWallCount: 0,
       complete: true,
       sources: [],
+      centreOfRigidityM: null,
     };
   }
+  // Σk·position per storey, NaN once a counted wall has no usable position.
+  const moment: number[] = [];
+  for (let i = 0; i < storeyCount; i++) moment.push(0);
   let anyWall = false;
   for (const w of walls) {
-    if (w.direction !== direction) continue;
+    if (w.direction !== direction) continue; // callers may pass both directions' walls
     const s = out[w.storey];
     if (s === undefined) continue; // invalid storey, already listed
     if (w.treatment === 'excluded-rocking') {
@@ -60,7 +75,17 @@ export function storeyLateral(
       s.stiffnessNPerM = (s.stiffnessNPerM ?? 0) + (w.stiffnessNPerM ?? 0);
       s.strengthN = (s.strengthN ?? 0) + (w.strengthN ?? 0);
       if (!s.sources.includes(w.source)) s.sources.push(w.source);
+      const pos = surveyWalls[w.index]?.positionM ?? null;
+      moment[w.storey] = plausible(pos, PLAUSIBLE.positionM)
+        ? moment[w.storey]! + (w.stiffnessNPerM ?? 0) * pos
+        : NaN;
     }
+  }
+  for (let i = 0; i < storeyCount; i++) {
+    const s = out[i]!;
+    const k = s.stiffnessNPerM;
+    const m = moment[i]!;
+    if (k !== null && k > 0 && !Number.isNaN(m)) s.centreOfRigidityM = m / k;
   }
   if (!anyWall) {
     findings.missing(

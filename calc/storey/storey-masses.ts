@@ -93,7 +93,7 @@ export function storeyMasses(building: BuildingInput, findings: Findings): Store
         unitWeightPa = table.pa;
         basis = 'default';
         source = table.source;
-        const id = `mass.default.${top ? 'roof' : 'floor'}.${construction}`;
+        const id = table.id;
         if (!findings.has(id)) {
           findings.assume(
             id,

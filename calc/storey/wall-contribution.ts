@@ -249,7 +249,6 @@ function wallContributionUnchecked(
     );
   }
   if (wall.type === 'rocking') {
-    findings.assume('wall.rocking-excluded', ROCKING_TEXT, ROCKING_SOURCE);
     return contribution(
       wall,
       index,
@@ -349,7 +348,6 @@ function wallContributionUnchecked(
     );
     return contribution(wall, index, 'excluded-invalid', null, null, 'none', 'unknown wall type');
   }
-  findings.assume('wall.sdpws-shear-term', SHEAR_TERM_TEXT, SHEAR_TERM_SOURCE);
   return contribution(
     wall,
     index,
@@ -394,4 +392,22 @@ export function wallContribution(
     c.source = 'values overflow';
   }
   return c;
+}
+
+/**
+ * Lists, once per result, the modelling assumptions behind a set of wall contributions: the
+ * SDPWS shear-term stiffness of sheathed walls, and the exclusion of rocking walls.
+ */
+export function noteWallAssumptions(
+  contributions: readonly WallContribution[],
+  findings: Findings,
+): void {
+  let table = false;
+  let rocking = false;
+  for (const c of contributions) {
+    if (c.basis === 'table') table = true;
+    else if (c.treatment === 'excluded-rocking') rocking = true;
+  }
+  if (table) findings.assume('wall.sdpws-shear-term', SHEAR_TERM_TEXT, SHEAR_TERM_SOURCE);
+  if (rocking) findings.assume('wall.rocking-excluded', ROCKING_TEXT, ROCKING_SOURCE);
 }

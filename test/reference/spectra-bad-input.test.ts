@@ -2,7 +2,12 @@
 // Property tests with fast-check (a general-purpose property-testing library from the registry).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { spectralAcceleration, spectralDisplacement } from '../../calc/index.js';
+import {
+  resolvedSpectralAcceleration,
+  resolveSpectrum,
+  spectralAcceleration,
+  spectralDisplacement,
+} from '../../calc/index.js';
 import type { SpectrumSpec } from '../../calc/index.js';
 
 const ec8 = { kind: 'ec8', type: 1, ground: 'B', ag: 0.25 } as const;
@@ -64,6 +69,19 @@ describe('spectra never return NaN (fast-check)', () => {
         return Number.isFinite(sa) && sa >= 0 && Number.isFinite(sd) && sd >= 0;
       }),
       { numRuns: 2000 },
+    );
+  });
+});
+
+describe('a resolved spectrum gives the same ordinates (fast-check)', () => {
+  it('resolvedSpectralAcceleration(resolveSpectrum(spec), T) equals spectralAcceleration(spec, T)', () => {
+    fc.assert(
+      fc.property(specArb, fc.double({ min: 0, max: 50, noNaN: true }), (spec, T) => {
+        return (
+          resolvedSpectralAcceleration(resolveSpectrum(spec), T) === spectralAcceleration(spec, T)
+        );
+      }),
+      { numRuns: 1000 },
     );
   });
 });
