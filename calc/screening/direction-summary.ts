@@ -18,6 +18,12 @@ export interface FlaggedStorey {
   extremeWeak5b: boolean;
   stiffnessRatioToAbove: number | null;
   strengthRatioToAbove: number | null;
+  /**
+   * Drift ratio of the storey if, once it yields, the whole inelastic roof displacement
+   * (C1 × elastic roof displacement) gathers in it, the storeys above staying near elastic:
+   * the storey mechanism of a weak storey. Null when not weak, not yielding or unknown.
+   */
+  mechanismDriftRatio: number | null;
 }
 
 export interface DirectionSummary {
@@ -73,7 +79,11 @@ function largest(values: readonly (number | null)[]): {
  *
  * @param siteConstant a of C1 (60, 90 or 130), see inelasticDisplacementFactor.
  */
-export function directionSummary(d: DirectionResponse, siteConstant: number): DirectionSummary {
+export function directionSummary(
+  d: DirectionResponse,
+  siteConstant: number,
+  storeyHeightsM: readonly (number | null)[],
+): DirectionSummary {
   const demand = d.demand;
   const dc = d.demandToCapacity ?? d.storeys.map(() => null);
   const maxDc = largest(dc);
@@ -97,6 +107,14 @@ export function directionSummary(d: DirectionResponse, siteConstant: number): Di
   const flaggedStoreys: FlaggedStorey[] = [];
   for (const irr of d.irregularities) {
     if (irr.soft1a || irr.extremeSoft1b || irr.weak5a || irr.extremeWeak5b) {
+      const weak = irr.weak5a === true || irr.extremeWeak5b === true;
+      const dcHere = dc[irr.storey] ?? null;
+      const h = storeyHeightsM[irr.storey] ?? null;
+      const roof = demand?.roofDisplacementM;
+      const mechanismDriftRatio =
+        weak && finite(dcHere) && dcHere >= 1 && finite(roof) && finite(h) && h > 0
+          ? (roof * inelasticFactor) / h
+          : null;
       flaggedStoreys.push({
         storey: irr.storey,
         soft1a: irr.soft1a === true,
@@ -105,6 +123,7 @@ export function directionSummary(d: DirectionResponse, siteConstant: number): Di
         extremeWeak5b: irr.extremeWeak5b === true,
         stiffnessRatioToAbove: finite(irr.stiffnessRatioToAbove) ? irr.stiffnessRatioToAbove : null,
         strengthRatioToAbove: finite(irr.strengthRatioToAbove) ? irr.strengthRatioToAbove : null,
+        mechanismDriftRatio,
       });
     }
   }

@@ -6,12 +6,13 @@
  * (Rocking walls: rocking-evidence.ts.)
  */
 import { damageProbabilities, type DamageProbabilities } from '../damage/damage-probabilities.js';
-import type { DamageState } from '../damage/damage-state.js';
+import { damageStateRank, type DamageState } from '../damage/damage-state.js';
 import type { HazusWoodClass } from '../damage/hazus-wood-class.js';
 import {
   THRESHOLD_STATES,
   type HazusWoodParameters,
   type PerState,
+  type ThresholdState,
 } from '../damage/hazus-wood-parameters.js';
 import {
   STIFFNESS_RATIO_LIMIT_EMPIRICAL,
@@ -245,9 +246,19 @@ export function noStrengthEvidence(dirs: readonly DirectionSummary[]): EvidenceI
   return out;
 }
 
-/** ASCE 7-16 Table 12.3-2 soft and weak storeys. */
-export function softWeakEvidence(dirs: readonly DirectionSummary[]): EvidenceItem[] {
+/**
+ * ASCE 7-16 Table 12.3-2 soft and weak storeys. A flagged storey whose walls yield shows at
+ * least Slight; a weak storey that yields is also read as a storey mechanism: the inelastic
+ * roof displacement gathering in it, its drift read against the Hazus thresholds (the
+ * soft-storey mechanism, derived from the deformed shape; an upper estimate).
+ */
+export function softWeakEvidence(
+  dirs: readonly DirectionSummary[],
+  params: HazusWoodParameters,
+  cls: HazusWoodClass,
+): EvidenceItem[] {
   const out: EvidenceItem[] = [];
+  const klass = `Hazus ${cls.type}, ${cls.level} code`;
   for (const d of dirs) {
     for (const f of d.flaggedStoreys) {
       if (d.zeroStrengthStoreys.includes(f.storey)) continue; // reported as no racking strength
@@ -266,6 +277,19 @@ export function softWeakEvidence(dirs: readonly DirectionSummary[]): EvidenceIte
           ? `strength ${percent(f.strengthRatioToAbove)} of the storey above`
           : null,
       ].filter((k): k is string => k !== null);
+      let state: DamageState | null = yields ? 'slight' : null;
+      let mechanism = '';
+      if (f.mechanismDriftRatio !== null) {
+        const m = damageProbabilities(f.mechanismDriftRatio, params.driftThresholds, params.betas);
+        if (damageStateRank(m.medianState) > damageStateRank(state ?? 'none')) {
+          state = m.medianState;
+        }
+        mechanism =
+          ` If the roof displacement gathers in it, its drift is ${percent(f.mechanismDriftRatio)}` +
+          (m.medianState === 'none'
+            ? ` (below the Slight threshold of ${klass}).`
+            : `, past the ${NAMES[m.medianState]} threshold ${percent(params.driftThresholds[THRESHOLD_STATES.indexOf(m.medianState as ThresholdState)]!)} of ${klass}.`);
+      }
       const flagged = yields || extreme;
       out.push({
         id: `soft-weak-storey.${f.storey}.${d.direction}`,
@@ -273,26 +297,30 @@ export function softWeakEvidence(dirs: readonly DirectionSummary[]): EvidenceIte
         kind: 'soft-weak-storey',
         label: 'Soft or weak storey',
         where: `${storeyName(f.storey)}, along ${d.direction}`,
-        value: f.strengthRatioToAbove ?? f.stiffnessRatioToAbove,
+        value: f.mechanismDriftRatio ?? f.strengthRatioToAbove ?? f.stiffnessRatioToAbove,
         unit: 'ratio',
-        valueText: ratios.join(', '),
+        valueText:
+          ratios.join(', ') +
+          (f.mechanismDriftRatio !== null
+            ? `; mechanism drift ${percent(f.mechanismDriftRatio)}`
+            : ''),
         threshold: f.weak5a || f.extremeWeak5b ? 0.8 : 0.7,
         thresholdText:
-          'soft: stiffness < 70 % of the storey above (extreme < 60 %); weak: strength < 80 % (extreme < 65 %)',
-        state: yields ? 'moderate' : null,
+          'soft: stiffness < 70 % of the storey above (extreme < 60 %); weak: strength < 80 % (extreme < 65 %); mechanism drift against the Hazus drift thresholds',
+        state,
         postingFloor: null,
         flag: flagged ? 'soft-or-weak-storey' : null,
         text:
           `${capital(storeyName(f.storey))} along ${d.direction} is a ${kinds.join(' and ')} storey (${ratios.join(', ')})` +
           (yields
-            ? `, and its walls yield (D/C ${fixed(dc, 2)}): the deformation gathers in it (at least Moderate).`
+            ? `, and its walls yield (D/C ${fixed(dc, 2)}): the deformation gathers in it (at least ${NAMES[state ?? 'slight']}).${mechanism}`
             : extreme
               ? '; its walls stay within their strength under this hazard, but an extreme irregularity needs an engineer.'
               : dc === null
                 ? '; without demand its effect is not judged.'
                 : `; its walls stay within their strength (D/C ${fixed(dc, 2)}).`),
         source:
-          'ASCE 7-16 Table 12.3-2 types 1a, 1b, 5a, 5b; least state when yielding ours (common practice, no source)',
+          'ASCE 7-16 Table 12.3-2 types 1a, 1b, 5a, 5b; storey mechanism drift = C1 × roof displacement / storey height (derived, upper estimate); least states ours (common practice, no source)',
       });
     }
   }

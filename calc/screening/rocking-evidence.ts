@@ -213,8 +213,17 @@ export function rockingEvidence(
 
     if (isRocking && a.predictedRatio !== null && a.predictedBand !== null) {
       const band = a.predictedBand;
-      const state = ROCKING_BAND_STATES[band].predicted;
+      let state = ROCKING_BAND_STATES[band].predicted;
+      // Toppling is Complete only when the time-history check agrees (or was not run): the
+      // spectral estimate alone is known to be unreliable (Makris & Konstantinidis 2003).
+      const disagree = band === 'beyond-stability' && a.pulse !== null && !a.pulse.atPga.overturned;
+      if (disagree) state = 'extensive';
       const sentences = flagSentences(a.flags, true);
+      if (disagree) {
+        sentences.push(
+          `The pulse time-history check does not topple it (peak θ/α ${fixed(a.pulse?.atPga.peakRatio ?? 0, 2)}), so Extensive rather than Complete.`,
+        );
+      }
       const flagged = sentences.length > 0;
       out.predicted.push({
         id: `rocking.${id}.predicted`,

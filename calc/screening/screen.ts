@@ -216,11 +216,12 @@ function confidenceOf(
     statement =
       'Confidence normal for a screening: the inputs the verdict uses were entered; defaults are limited to typical loads and model idealisations.';
   }
-  if (missing.length > 0) {
-    statement += ` Missing or unusable: ${missingText.slice(0, 5).join('; ')}${missing.length > 5 ? `; and ${missing.length - 5} more` : ''}.`;
+  const some = (list: string[]) =>
+    list.slice(0, 3).join('; ') + (list.length > 3 ? `; and ${list.length - 3} more` : '');
+  if (missing.length > 0) statement += ` Missing or unusable: ${some(missingText)}.`;
+  if (classDefaults.length + key.length > 0) {
+    statement += ` Key defaults: ${some([...classDefaults, ...key])}`;
   }
-  if (classDefaults.length + key.length > 0)
-    statement += ` ${[...classDefaults, ...key].join(' ')}`;
   return { level, statement, missing: missingText, defaulted, addedBeta };
 }
 
@@ -269,9 +270,15 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   const params = HAZUS_WOOD[cls.type][cls.level];
   const hazard = usableHazard(survey, response);
   const a = siteConstant(hazard, findings);
+  const heights = (Array.isArray(survey.building.storeys) ? survey.building.storeys : []).map(
+    (st) =>
+      typeof st?.heightM === 'number' && Number.isFinite(st.heightM) && st.heightM > 0
+        ? st.heightM
+        : null,
+  );
   const dirs: [DirectionSummary, DirectionSummary] = [
-    directionSummary(response.x, a),
-    directionSummary(response.y, a),
+    directionSummary(response.x, a, heights),
+    directionSummary(response.y, a, heights),
   ];
 
   // Uncertain input groups widen β.
@@ -301,7 +308,7 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
     ...fragility.items,
     ...demandCapacityEvidence(dirs),
     ...noStrengthEvidence(dirs),
-    ...softWeakEvidence(dirs),
+    ...softWeakEvidence(dirs, params, cls),
     ...torsionEvidence(dirs),
     ...rocking.predicted,
     ...stiffnessLossEvidence(response),
@@ -357,7 +364,7 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   // Posting.
   let level: PostingLevel = POSTING_BY_STATE[state];
   const postingReasons: string[] = [
-    `${WORDS[state]} damage: ${POSTING_WORDS[level].word.toLowerCase()} (our table: None or Slight → Open, Moderate → Limited entry, Extensive or Complete → Keep out).`,
+    `${WORDS[state]} damage → ${POSTING_WORDS[level].word} (Grainline's table: None or Slight → Open, Moderate → Limited entry, Extensive or Complete → Keep out).`,
   ];
   const all = [...predicted, ...observed];
   for (const item of all) {
@@ -418,7 +425,10 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   if (predictedState !== null && observedState !== state && state !== 'none') {
     reasons.push(
       observedState === 'none'
-        ? `Nothing seen was recorded as damage; the predicted ${WORDS[state]} stands. Look again behind finishes, in the crawl space, and at hold-downs and connections.`
+        ? `Nothing seen was recorded as damage; the predicted ${WORDS[state]} stands.` +
+            (damageStateRank(state) >= damageStateRank('moderate')
+              ? ' Look again behind finishes, in the crawl space, and at hold-downs and connections.'
+              : '')
         : `What was seen alone gives ${WORDS[observedState]}; the predicted ${WORDS[state]} stands.`,
     );
   }
@@ -437,9 +447,16 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   }
 
   // Assumptions, missing inputs, confidence.
-  const rockingAssumptions: Assumption[] = rocking.assumptions.map((x, i) => ({
-    id: `rocking.${x.wallId}.${i}`,
-    text: `Wall ${x.wallId}: ${x.text}`,
+  // The same sentence for several walls is listed once, with the walls it applies to.
+  const byText = new Map<string, string[]>();
+  for (const x of rocking.assumptions) {
+    const ids = byText.get(x.text) ?? [];
+    if (!ids.includes(x.wallId)) ids.push(x.wallId);
+    byText.set(x.text, ids);
+  }
+  const rockingAssumptions: Assumption[] = [...byText].map(([text, ids], i) => ({
+    id: `rocking.${i}`,
+    text: `${ids.length === 1 ? 'Wall' : 'Walls'} ${ids.join(', ')}: ${text}`,
     source: 'calc/rocking (rockingWallFromInput, assessRockingWall)',
   }));
   const assumptions = [...response.assumptions, ...findings.assumptions, ...rockingAssumptions];
