@@ -252,7 +252,16 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
     demandToCapacity = new Array<number | null>(n);
     for (let i = 0; i < n; i++) {
       const cap = strength[i] ?? null;
-      demandToCapacity[i] = cap !== null && cap > 0 ? demand.storeyShearsN[i]! / cap : null;
+      const ratio = cap !== null && cap > 0 ? demand.storeyShearsN[i]! / cap : null;
+      // A vanishingly small (but positive) strength overflows the ratio; report it as an
+      // entry problem rather than pass Infinity on.
+      if (ratio !== null && !Number.isFinite(ratio)) {
+        findings.invalid(
+          `walls (storey ${i}, ${direction})`,
+          'The storey strength is too small to compare with the demand; check the wall values.',
+        );
+      }
+      demandToCapacity[i] = ratio !== null && Number.isFinite(ratio) ? ratio : null;
     }
   }
 

@@ -1,5 +1,6 @@
 // No NaN (or Infinity) ever leaves the calculation core, whatever the survey holds.
 // Property tests with fast-check (general-purpose property-testing library from the registry).
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
@@ -136,6 +137,23 @@ describe('buildingResponse with any survey (fast-check)', () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe('buildingResponse on counterexamples fast-check once found', () => {
+  it('does not pass Infinity on when a wall strength is vanishingly small (9e-323 N/m)', () => {
+    const s = JSON.parse(
+      readFileSync(
+        new URL('../fixtures/calc/subnormal-wall-strength.json', import.meta.url),
+        'utf8',
+      ),
+    ) as SurveyInput;
+    const r = buildingResponse(s);
+    expect(badNumbers(r)).toEqual([]);
+    expect(r.x.demandToCapacity?.[0]).toBeNull();
+    expect(
+      r.missingInputs.some((m) => m.problem === 'invalid' && m.field.includes('storey 0')),
+    ).toBe(true);
   });
 });
 
