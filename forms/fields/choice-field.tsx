@@ -53,6 +53,9 @@ export function ChoiceField<T extends string>(p: ChoiceFieldProps<T>) {
               value={o.value}
               checked={p.value === o.value}
               onChange={() => p.onChoose(o.value)}
+              // A tap on the option already chosen (an app default) confirms it too;
+              // browsers send no change event for it.
+              onClick={() => p.value === o.value && p.onChoose(o.value)}
             />
             <span class="choice__text">
               <span class="choice__label">{o.label}</span>

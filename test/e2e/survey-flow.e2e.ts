@@ -51,9 +51,13 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     server = await startServer(distDir);
     context = await launchContext({ viewport: PHONE });
     page = await context.newPage();
+    page.setDefaultTimeout(10_000);
     page.on('pageerror', (e) => pageErrors.push(e.message));
     page.on('console', (m) => {
-      if (m.type() === 'error') pageErrors.push(m.text());
+      // Offline, the demo-town request fails at the network: that is the expected outcome.
+      if (m.type() === 'error' && !m.text().includes('ERR_INTERNET_DISCONNECTED')) {
+        pageErrors.push(m.text());
+      }
     });
     page.on('dialog', (d) => void d.accept());
     await page.goto(server.url);
@@ -112,7 +116,7 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     await page.getByText('Light frame', { exact: true }).click();
     await page.getByLabel('Era of design (seismic code level)').selectOption('moderate');
     await page.getByLabel('Main use').selectOption('multi-family');
-    await page.getByLabel('Roof', { exact: true }).selectOption('light');
+    await page.getByLabel('Kind of roof').selectOption('light');
     await page.getByRole('button', { name: 'Add a storey' }).click();
     await page.getByRole('button', { name: 'Add a storey' }).click();
     await expect(page.locator('.stepper__value').textContent()).resolves.toBe('2');
@@ -133,15 +137,17 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     const second = page.getByLabel('Storey 2: Storey height');
     await second.fill('-1');
     await page.getByText('Storey height cannot be negative.').first().waitFor();
-    await expect(page.getByRole('link', { name: /Storey 2: Storey height cannot be negative/ }).isVisible()).resolves.toBe(true);
+    await expect(
+      page.getByRole('link', { name: /Storey 2: Storey height cannot be negative/ }).isVisible(),
+    ).resolves.toBe(true);
     await second.fill('2.6');
     await waitSaved(page);
     await shoot(page, '03-building');
   });
 
   it('keeps everything after a reload in the middle of the flow', async () => {
+    // Reload at once, before the autosave's quarter second is over.
     await page.getByLabel('Storey 1: Floor area').fill('abc');
-    await waitSaved(page);
     await page.reload();
     await page.getByRole('heading', { level: 1, name: /Building/ }).waitFor();
     await expect(page.locator('.stepper__value').textContent()).resolves.toBe('2');
@@ -169,19 +175,24 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     await wsp100.fill('12');
 
     await page.getByRole('button', { name: 'Add a rocking wall' }).click();
-    const length = page.getByLabel(/Wall 2X-1: Panel length/);
+    const length = page.getByRole('textbox', { name: /Wall 2X-1: Panel length/ });
     await length.waitFor();
     await length.fill('-3');
     await page.getByText('Panel length cannot be negative.').first().waitFor();
     await length.fill('16');
-    await page.getByText(/Panel length: 16 m is more than usual/).first().waitFor();
+    await page
+      .getByText(/Panel length: 16 m is more than usual/)
+      .first()
+      .waitFor();
     await length.fill('2.4');
-    await page.getByLabel(/Wall 2X-1: Wall line position/).fill('4');
-    await page.getByLabel(/Wall 2X-1: Panel thickness/).fill('140');
-    await page.getByLabel(/Wall 2X-1: Gravity load on top/).fill('30');
-    await page.getByLabel(/Wall 2X-1: Post-tension force/).fill('0');
+    await page.getByRole('textbox', { name: /Wall 2X-1: Wall line position/ }).fill('4');
+    await page.getByRole('textbox', { name: /Wall 2X-1: Panel thickness/ }).fill('140');
+    await page.getByRole('textbox', { name: /Wall 2X-1: Gravity load on top/ }).fill('30');
+    await page.getByRole('textbox', { name: /Wall 2X-1: Post-tension force/ }).fill('0');
     await waitSaved(page);
-    await expect(page.getByRole('img', { name: /Plan sketch of storey 2/ }).isVisible()).resolves.toBe(true);
+    await expect(
+      page.getByRole('img', { name: /Plan sketch of storey 2/ }).isVisible(),
+    ).resolves.toBe(true);
     await shoot(page, '04-walls');
   });
 
@@ -190,7 +201,9 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     await page.getByRole('heading', { level: 1, name: /Observations/ }).waitFor();
     await page.getByLabel('Storey 1, along x: Offset').fill('14');
     await page.getByText('Residual drift 0.50 % (from the offset)').waitFor();
-    await page.getByRole('button', { name: /Confirm Storey 1, along x: Height measured over/ }).click();
+    await page
+      .getByRole('button', { name: /Confirm Storey 1, along x: Height measured over/ })
+      .click();
     await page.getByLabel('Storey 2, along y: Or: tilt').fill('0.3');
     await page.getByText('Residual drift 0.52 % (from the tilt)').waitFor();
     await page.getByLabel(/Wall 2X-1 \(Rocking wall\): uplift gap/).fill('6');
@@ -198,7 +211,9 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
       .getByRole('group', { name: 'Nails or screws pulled out' })
       .getByText('Minor', { exact: true })
       .click();
-    await page.getByRole('textbox', { name: 'Notes' }).fill('Stair cracked at landing; rear door binds.');
+    await page
+      .getByRole('textbox', { name: 'Notes' })
+      .fill('Stair cracked at landing; rear door binds.');
     await waitSaved(page);
     await shoot(page, '05-observations');
   });
@@ -228,7 +243,10 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
   });
 
   it('lists the building with its address and the not-exported marker, and finds it by search', async () => {
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Buildings' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Buildings' })
+      .click();
     await page.getByRole('heading', { level: 1, name: 'Buildings' }).waitFor();
     const item = page.getByRole('link', { name: /7 Quarry Row, Upper Fennick/ });
     await item.waitFor();
@@ -244,7 +262,10 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
   });
 
   it('switches to US customary units: the same stored values appear in feet', async () => {
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Settings' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Settings' })
+      .click();
     await page.getByRole('heading', { level: 1, name: 'Settings' }).waitFor();
     await page.getByText('US customary', { exact: true }).click();
     await page.getByText('High contrast, for bright sunlight').click();

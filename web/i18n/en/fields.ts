@@ -70,6 +70,7 @@ export const fields = {
   'field.codeLevel': 'Era of design (seismic code level)',
   'field.occupancy': 'Main use',
   'field.roof': 'Roof',
+  'field.roofType': 'Kind of roof',
   'field.roofUnitWeight': 'Roof dead load',
   'field.planX': 'Plan length along x',
   'field.planY': 'Plan length along y',

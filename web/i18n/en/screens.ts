@@ -195,7 +195,7 @@ export const screens = {
   'plan.title': 'Plan sketch of storey {storey}',
   'plan.desc': '{placed} walls with a position are drawn; {unplaced} walls have none.',
   'plan.caption': 'Walls are drawn on their wall line; where along the line is not recorded.',
-  'plan.unplaced': '{count} walls have no position and are not drawn.',
+  'plan.unplaced': '{count} walls or sheathing totals have no position and are not drawn.',
 
   // Observations.
   'obs.drift': 'Residual lean per storey',
@@ -273,7 +273,7 @@ export const screens = {
   'plot.periodAxis': 'Period T (s)',
   'plot.saAxis': 'Sa (g)',
   'plot.spectrumTitle': 'Response spectrum',
-  'plot.markLabel': 'T {period} s, Sa {sa} g',
+  'plot.markLabel': '{label}: T {period} s, Sa {sa} g',
   'plot.driftAxis': 'Drift (%)',
   'plot.storeyShort': 'Storey {n}',
   'plot.gaugeTitle': 'Rocking of wall {id}: θ/α',

@@ -75,7 +75,6 @@ export function ResultScreen(props: { params: { id?: string } }) {
         p.T !== null && p.kind !== null,
     );
   const main = usedPeriods[0] ?? null;
-  const demandG = hazard && main ? spectralAcceleration(hazard, main.T) : null;
   const n = record.building.storeys.length;
 
   // Drift profile: observed residual drift, and the estimated peak elastic drift.
@@ -114,7 +113,7 @@ export function ResultScreen(props: { params: { id?: string } }) {
         value: dc.toFixed(2),
         threshold: '1.00',
         exceeds: dc > 1,
-        note: t('result.evidence.dcNote'),
+        note: evidence.length === 0 ? t('result.evidence.dcNote') : undefined,
       });
     });
   }
@@ -127,7 +126,9 @@ export function ResultScreen(props: { params: { id?: string } }) {
         value: ratio.toFixed(2),
         threshold: ROCKING_BAND_LIMITS.large.toFixed(2),
         exceeds: ratio >= ROCKING_BAND_LIMITS.large,
-        note: t('result.evidence.rockingNote'),
+        note: evidence.some((e) => e.key.startsWith('rock-'))
+          ? undefined
+          : t('result.evidence.rockingNote'),
       });
     }
   }
@@ -244,17 +245,23 @@ export function ResultScreen(props: { params: { id?: string } }) {
           <SpectrumPlot
             id="result-spectrum"
             points={sampleSpectrum(hazard, Math.max(4, (main?.T ?? 0) * 1.3))}
-            periodS={main?.T ?? null}
-            demandG={demandG}
-            otherPeriods={usedPeriods.slice(1).map((p) => ({ label: p.d, periodS: p.T }))}
+            marks={usedPeriods.map((q) => ({
+              label: q.d,
+              periodS: q.T,
+              saG: spectralAcceleration(hazard, q.T),
+            }))}
             title={t('plot.spectrumTitle')}
             summary={
-              main && demandG !== null
-                ? t('result.spectrumSummary', {
-                    direction: main.d,
-                    T: main.T.toFixed(2),
-                    sa: demandG.toFixed(3),
-                  })
+              usedPeriods.length > 0
+                ? usedPeriods
+                    .map((q) =>
+                      t('result.spectrumSummary', {
+                        direction: q.d,
+                        T: q.T.toFixed(2),
+                        sa: spectralAcceleration(hazard, q.T).toFixed(3),
+                      }),
+                    )
+                    .join(' ')
                 : t('result.spectrumNoPeriod')
             }
           />

@@ -14,12 +14,8 @@ export interface SpectrumPoint {
 export interface SpectrumPlotProps {
   id: string;
   points: readonly SpectrumPoint[];
-  /** The period the demand is read at, s; null when there is none. */
-  periodS: number | null;
-  /** Sa at that period, g. */
-  demandG: number | null;
-  /** Other period estimates shown as thin ticks on the axis (e.g. empirical). */
-  otherPeriods?: readonly { label: string; periodS: number }[];
+  /** The periods the demand is read at (one per direction), with Sa there in g. */
+  marks: readonly { label: string; periodS: number; saG: number }[];
   title: string;
   /** A sentence with the same content, for screen readers and print. */
   summary: string;
@@ -30,8 +26,8 @@ const H = 250;
 const M = { left: 46, right: 14, top: 14, bottom: 42 };
 
 export function SpectrumPlot(p: SpectrumPlotProps) {
-  const maxT = Math.max(...p.points.map((q) => q.periodS), p.periodS ?? 0);
-  const maxSa = Math.max(...p.points.map((q) => q.saG), p.demandG ?? 0);
+  const maxT = Math.max(...p.points.map((q) => q.periodS), ...p.marks.map((m) => m.periodS));
+  const maxSa = Math.max(...p.points.map((q) => q.saG), ...p.marks.map((m) => m.saG));
   const xAxis = niceAxis(maxT, 4);
   const yAxis = niceAxis(maxSa * 1.08, 4);
   const x = linear(0, xAxis.top, M.left, W - M.right);
@@ -41,11 +37,6 @@ export function SpectrumPlot(p: SpectrumPlotProps) {
     .join(' ');
   const titleId = `${p.id}-title`;
   const descId = `${p.id}-desc`;
-  const hasMark = p.periodS !== null && p.demandG !== null;
-  const markX = hasMark ? x(p.periodS as number) : 0;
-  const markY = hasMark ? y(p.demandG as number) : 0;
-  // Keep the marker's label inside the plot on the right-hand side.
-  const labelRight = markX > W * 0.6;
   return (
     <figure class="plot-figure">
       <svg
@@ -90,35 +81,40 @@ export function SpectrumPlot(p: SpectrumPlotProps) {
           {t('plot.saAxis')}
         </text>
         <path d={path} class="plot__line" />
-        {(p.otherPeriods ?? []).map((o) => (
-          <g key={o.label}>
-            <line
-              x1={x(o.periodS)}
-              x2={x(o.periodS)}
-              y1={H - M.bottom}
-              y2={H - M.bottom - 10}
-              class="plot__tick-mark"
-            />
-          </g>
+        {p.marks.map((m, i) => {
+          const mx = x(m.periodS);
+          const my = y(m.saG);
+          return (
+            <g key={m.label} class="plot__mark">
+              <line x1={mx} x2={mx} y1={H - M.bottom} y2={my} class="plot__guide" />
+              <line x1={M.left} x2={mx} y1={my} y2={my} class="plot__guide" />
+              <circle cx={mx} cy={my} r={6} class="plot__dot" />
+              <text
+                x={mx + (i === 0 ? -9 : 9)}
+                y={my + 18}
+                class="plot__label plot__label--strong plot__label--halo"
+                text-anchor={i === 0 ? 'end' : 'start'}
+              >
+                {m.label}
+              </text>
+            </g>
+          );
+        })}
+        {p.marks.map((m, i) => (
+          <text
+            key={`legend-${m.label}`}
+            x={W - M.right}
+            y={M.top + 14 + i * 18}
+            class="plot__label plot__label--strong plot__label--halo"
+            text-anchor="end"
+          >
+            {t('plot.markLabel', {
+              label: m.label,
+              period: tickLabel(m.periodS, 2),
+              sa: tickLabel(m.saG, 3),
+            })}
+          </text>
         ))}
-        {hasMark && (
-          <g class="plot__mark">
-            <line x1={markX} x2={markX} y1={H - M.bottom} y2={markY} class="plot__guide" />
-            <line x1={M.left} x2={markX} y1={markY} y2={markY} class="plot__guide" />
-            <circle cx={markX} cy={markY} r={6} class="plot__dot" />
-            <text
-              x={labelRight ? markX - 10 : markX + 10}
-              y={Math.max(M.top + 14, markY - 10)}
-              class="plot__label plot__label--strong"
-              text-anchor={labelRight ? 'end' : 'start'}
-            >
-              {t('plot.markLabel', {
-                period: tickLabel(p.periodS as number, 2),
-                sa: tickLabel(p.demandG as number, 3),
-              })}
-            </text>
-          </g>
-        )}
       </svg>
       <figcaption class="plot-figure__caption">{p.summary}</figcaption>
     </figure>

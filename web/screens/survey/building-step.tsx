@@ -283,7 +283,7 @@ export function BuildingStep({ ctx }: StepProps) {
         <h2 id="roof-title">{t('field.roof')}</h2>
         <SelectField
           path="building.roofConstruction"
-          label={t('field.roof')}
+          label={t('field.roofType')}
           options={options(ROOFS, 'roof')}
           value={b.roofConstruction}
           onChoose={choose('roofConstruction')}

@@ -217,8 +217,7 @@ export function HazardStep({ ctx }: StepProps) {
         <SpectrumPlot
           id="hazard-preview"
           points={sampleSpectrum(hazard)}
-          periodS={null}
-          demandG={null}
+          marks={[]}
           title={t('plot.spectrumTitle')}
           summary={t('hazard.previewSummary', {
             peak: Math.max(...sampleSpectrum(hazard).map((p) => p.saG)).toFixed(2),

@@ -363,13 +363,18 @@ export function removeWall(record: SurveyRecord, index: number): SurveyRecord {
   return forgetUnder(next, upliftPendingKey(wall.id));
 }
 
-/** Copies the walls of one storey and direction to another storey, marked unconfirmed. */
+/**
+ * Copies the walls of one storey and direction to another storey that has none there yet,
+ * marked unconfirmed. (A storey that already has walls along that direction is left as it
+ * is: copying again would double them.)
+ */
 export function copyWalls(
   record: SurveyRecord,
   fromStorey: number,
   toStorey: number,
   direction: 'x' | 'y',
 ): SurveyRecord {
+  if (record.walls.some((w) => w.storey === toStorey && w.direction === direction)) return record;
   let next = record;
   for (const w of record.walls) {
     if (w.storey !== fromStorey || w.direction !== direction) continue;

@@ -6,7 +6,8 @@
  */
 import { useEffect, useMemo, useRef } from 'preact/hooks';
 import '../../styles/screens.css';
-import { useSurveyDraft } from '../../storage/index.js';
+import { useSurveyDraft, type SurveyDraft } from '../../storage/index.js';
+import { backupUnsaved, dropBackup, takeBackup } from './unsaved-backup.js';
 import { t } from '../../i18n/index.js';
 import { paths } from '../../app/routes.js';
 import { useUnits } from '../settings/preferences.js';
@@ -23,6 +24,33 @@ import { STEPS, stepFromParam, stepLabels, type StepId } from './steps.js';
 import { WallsStep } from './walls-step.js';
 import { DraftNotices } from './draft-notices.js';
 
+/**
+ * Keeps a synchronous copy of an unsaved change when the page goes away, and restores it
+ * once when the survey is opened again (see unsaved-backup.ts).
+ */
+function useUnsavedBackup(draft: SurveyDraft): void {
+  const latest = useRef(draft);
+  latest.current = draft;
+  const restored = useRef(false);
+  useEffect(() => {
+    const onHide = () => {
+      const d = latest.current;
+      if (d.record && d.saveState !== 'saved') backupUnsaved(d.record);
+    };
+    window.addEventListener('pagehide', onHide);
+    return () => window.removeEventListener('pagehide', onHide);
+  }, []);
+  useEffect(() => {
+    if (restored.current || draft.loading || !draft.record) return;
+    restored.current = true;
+    const copy = takeBackup(draft.record);
+    if (copy && JSON.stringify(copy) !== JSON.stringify(draft.record)) draft.update(() => copy);
+  }, [draft.loading, draft.record]);
+  useEffect(() => {
+    if (draft.record && draft.saveState === 'saved') dropBackup(draft.record.id);
+  }, [draft.saveState]);
+}
+
 const STEP_COMPONENTS: Record<StepId, (p: { ctx: StepContext }) => preact.JSX.Element> = {
   place: PlaceStep,
   building: BuildingStep,
@@ -38,6 +66,7 @@ export function SurveyScreen(props: { params: { id?: string; step?: string } }) 
   const system = useUnits();
   const heading = useRef<HTMLHeadingElement>(null);
   const record = draft.record;
+  useUnsavedBackup(draft);
   const issues = useMemo(() => (record ? stepIssues(record, system) : null), [record, system]);
 
   // A new step starts at its heading: scrolled to the top, focus there for the keyboard.

@@ -3,6 +3,7 @@
  * dimensions, loads, post-tension and connectors; 'user' walls take strength and stiffness
  * per length; any wall can list supplemental devices (recorded, not modelled).
  */
+import { useState } from 'preact/hooks';
 import type { SurveyRecord, WallRecord } from '../../../forms/index.js';
 import {
   NumberField,
@@ -23,6 +24,9 @@ export function WallCard(props: { ctx: StepContext; index: number }) {
   const { ctx, index } = props;
   const { record, edit } = ctx;
   const wall = record.walls[index];
+  // Open or closed is the inspector's choice: decided once, never flipped by typing.
+  const [panelOpen, setPanelOpen] = useState(wall?.rocking?.thicknessM === null);
+  const [devicesOpen, setDevicesOpen] = useState((wall?.devices.length ?? 0) > 0);
   if (!wall) return null;
   const base = `walls.${index}`;
   const panel = isPanelType(wall.type);
@@ -108,7 +112,11 @@ export function WallCard(props: { ctx: StepContext; index: number }) {
         </div>
       )}
       {panel && (
-        <details class="more" open={wall.rocking?.thicknessM === null}>
+        <details
+          class="more"
+          open={panelOpen}
+          onToggle={(e) => setPanelOpen((e.currentTarget as HTMLDetailsElement).open)}
+        >
           <summary>{t('walls.panelDetails')}</summary>
           <NumberField
             {...numberProps(ctx, `${base}.rocking.thicknessM`)}
@@ -182,7 +190,11 @@ export function WallCard(props: { ctx: StepContext; index: number }) {
           </div>
         </details>
       )}
-      <details class="more" open={wall.devices.length > 0}>
+      <details
+        class="more"
+        open={devicesOpen}
+        onToggle={(e) => setDevicesOpen((e.currentTarget as HTMLDetailsElement).open)}
+      >
         <summary>
           {t('field.devices')}
           {wall.devices.length > 0 && ` (${wall.devices.length})`}
