@@ -166,13 +166,13 @@ function finiteValues(values: Samples): number[] {
 function summary(
   analysis: FundamentalAnalysis,
   detrended: Float64Array,
-  raw: Samples,
+  step: number | null,
 ): AxisSummary {
   return {
     estimate: analysis.estimate,
     reason: analysis.reason,
     rmsMps2: rms(detrended),
-    quantizationStepMps2: quantizationStep(finiteValues(raw)),
+    quantizationStepMps2: step,
   };
 }
 
@@ -240,17 +240,21 @@ export function analyseAmbientRecord(input: AmbientRecordInput): AmbientAnalysis
   if (Math.abs(meanZ) < FLAT_COS * Math.hypot(meanX, meanY, meanZ)) caveats.push('not-flat');
 
   const band = input.bandHz ?? DEFAULT_BAND_HZ;
-  const options = { bandHz: band } as const;
+  const rawSteps = {
+    x: quantizationStep(finiteValues(raw.x)),
+    y: quantizationStep(finiteValues(raw.y)),
+    z: quantizationStep(finiteValues(raw.z)),
+  };
   const dx = detrend(cx, 'linear');
   const dy = detrend(cy, 'linear');
   const dz = detrend(cz, 'linear');
-  const ax = analyseFundamental(dx, fs, options);
-  const ay = analyseFundamental(dy, fs, options);
-  const az = analyseFundamental(dz, fs, options);
+  const ax = analyseFundamental(dx, fs, { bandHz: band, quantizationStep: rawSteps.x });
+  const ay = analyseFundamental(dy, fs, { bandHz: band, quantizationStep: rawSteps.y });
+  const az = analyseFundamental(dz, fs, { bandHz: band, quantizationStep: rawSteps.z });
   const axes = {
-    x: summary(ax, dx, raw.x),
-    y: summary(ay, dy, raw.y),
-    z: summary(az, dz, raw.z),
+    x: summary(ax, dx, rawSteps.x),
+    y: summary(ay, dy, rawSteps.y),
+    z: summary(az, dz, rawSteps.z),
   };
   const steps = [axes.x, axes.y, axes.z].map((a) => a.quantizationStepMps2 ?? 0);
   const ROUNDING_SHARE = 0.5; // a step of half the browser's rounding or more counts as rounding (our choice)
@@ -271,20 +275,21 @@ export function analyseAmbientRecord(input: AmbientRecordInput): AmbientAnalysis
       : null;
   const base = { sampleRateHz: fs, durationS, axes, spectrum };
 
-  // Rounding hides motion smaller than about half a step: nothing on either axis is real then.
-  const hidden = (a: AxisSummary) =>
-    a.quantizationStepMps2 !== null && a.rmsMps2 < a.quantizationStepMps2 / 2;
-  if (hidden(axes.x) && hidden(axes.y)) return empty('below-resolution', base);
+  // Rounding hides motion smaller than about a step: nothing on either axis is real then.
+  const hidden = (a: FundamentalAnalysis) => a.reason === 'below-resolution';
+  if (hidden(ax) && hidden(ay)) return empty('below-resolution', base);
 
-  const ex = hidden(axes.x) ? null : ax.estimate;
-  const ey = hidden(axes.y) ? null : ay.estimate;
+  const ex = ax.estimate;
+  const ey = ay.estimate;
   if (!ex && !ey) {
     const reasons = [ax.reason, ay.reason];
     const status: AmbientStatus = reasons.includes('no-clear-peak')
       ? 'no-clear-peak'
-      : reasons.includes('no-signal')
-        ? 'no-signal'
-        : 'too-short';
+      : reasons.includes('below-resolution')
+        ? 'below-resolution'
+        : reasons.includes('no-signal')
+          ? 'no-signal'
+          : 'too-short';
     return empty(status, base);
   }
 

@@ -15,6 +15,7 @@
 import { requireFiniteSamples, requirePositive } from './checks.js';
 import type { Samples } from './checks.js';
 import { detrend } from './detrend.js';
+import { quantizationStep } from './sensor-limits.js';
 import { halfPowerBand, dampingFromBandwidth } from './half-power.js';
 import { fitSdofPeak, periodogram } from './sdof-fit.js';
 import { findPeaks } from './peaks.js';
@@ -30,12 +31,13 @@ export const DEFAULT_BAND_HZ: readonly [number, number] = [0.5, 25]; // our choi
 /**
  * A peak counts only if its prominence is at least this many standard deviations of the
  * PSD's own scatter (spectralScatterDb). For Gaussian noise the upper tail of a Welch
- * value on the dB scale is very light (ν ≈ 19: P(> 4.5σ) < 1e-9 per bin; derived from χ²_ν);
- * over 2,000 seeded noise-only phone records (white, drifting and rounded sensor noise,
- * 60 and 120 s) the largest prominence seen was about 3.8σ; see
- * test/reference/vibration-fundamental.test.ts. Our choice, tuned, no source.
+ * value on the dB scale is very light (ν ≈ 19: P(> 5σ) < 1e-9 per bin; derived from χ²_ν).
+ * Over 2,000 seeded noise-only phone records (white noise, drift up to 0.03 m/s², 16-bit
+ * rounding; 60, 90 and 120 s; 60 and 100 Hz) the largest prominence seen was 4.3σ, so 5σ
+ * leaves a margin; test/reference/vibration-fundamental.test.ts repeats a share of them.
+ * Our choice, tuned, no source.
  */
-export const DETECTION_SIGMA = 4.5;
+export const DETECTION_SIGMA = 5;
 
 /** Prominence, in scatter units, at which the prominence part of the confidence reaches 1. Our choice, no source. */
 export const FULL_CONFIDENCE_SIGMA = 12;
@@ -69,6 +71,11 @@ export interface FundamentalOptions {
   padFactor?: number;
   /** Detection threshold in scatter units. Default DETECTION_SIGMA. */
   detectionSigma?: number;
+  /**
+   * Rounding step of the readings, same unit as the samples; null when they are not rounded.
+   * Default: detected from the samples (which resampled data hides, so pass it then).
+   */
+  quantizationStep?: number | null;
 }
 
 /** The estimate `identifyFundamental` returns. */
@@ -97,7 +104,7 @@ export interface FundamentalEstimate {
 }
 
 /** Why there is no estimate. */
-export type NoEstimateReason = 'too-short' | 'no-signal' | 'no-clear-peak';
+export type NoEstimateReason = 'too-short' | 'no-signal' | 'below-resolution' | 'no-clear-peak';
 
 /** A significant peak, for display and for cross-axis checks. */
 export interface PeakCandidate {
@@ -293,6 +300,15 @@ export function analyseFundamental(
   if (n < MIN_SAMPLES) return none('too-short');
 
   const x = detrend(samples, 'linear');
+  // A record that never changes (beyond floating-point dust) has no spectrum to search.
+  let scale = 0;
+  let ss = 0;
+  for (let i = 0; i < n; i++) {
+    scale = Math.max(scale, Math.abs(samples[i] as number));
+    ss += (x[i] as number) ** 2;
+  }
+  const DUST = 1e-12; // relative size of rounding residue after detrending (our choice)
+  if (!(Math.sqrt(ss / n) > DUST * Math.max(1, scale))) return none('no-signal');
   const segmentLength = options.segmentLength ?? defaultSegmentLength(n);
   const welch = welchPsd(x, fs, {
     segmentLength,
@@ -314,7 +330,20 @@ export function analyseFundamental(
   const bandHz = [lo * binHz, hi * binHz] as const;
 
   let maxPsd = 0;
-  for (let k = lo; k <= hi; k++) maxPsd = Math.max(maxPsd, psd[k] as number);
+  let bandPower = 0;
+  for (let k = lo; k <= hi; k++) {
+    maxPsd = Math.max(maxPsd, psd[k] as number);
+    bandPower += (psd[k] as number) * binHz;
+  }
+  // Rounded readings: the rounding adds noise of power step²/12 (Widrow & Kollár, Quantization
+  // Noise, 2008) that is not Gaussian (a slow drift crossing a level makes a step, and steps
+  // make peaks). Unless the motion in the band is at least one step RMS — rounding noise then
+  // ≤ 1/12 of the power — the spectrum is the rounding's, not the building's. Our choice.
+  const step =
+    options.quantizationStep === undefined ? quantizationStep(samples) : options.quantizationStep;
+  if (step !== null && Math.sqrt(bandPower) < step) {
+    return none('below-resolution', spectrum, [lo * binHz, hi * binHz]);
+  }
   if (!(maxPsd > 0)) return none('no-signal', spectrum, bandHz);
   const floor = Math.max(TINY, maxPsd * 1e-20);
 

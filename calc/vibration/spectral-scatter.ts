@@ -12,16 +12,16 @@ import { requirePositive } from './checks.js';
 const DB_PER_NEPER = 10 / Math.LN10;
 
 /**
- * Trigamma ψ₁(x) for x > 0: the recurrence ψ₁(x) = ψ₁(x + 1) + 1/x² up to x ≥ 6, then the
+ * Trigamma ψ₁(x) for x > 0: the recurrence ψ₁(x) = ψ₁(x + 1) + 1/x² up to x ≥ 10, then the
  * asymptotic series 1/x + 1/(2x²) + 1/(6x³) − 1/(30x⁵) + 1/(42x⁷) − 1/(30x⁹)
- * (Abramowitz & Stegun 6.4.6 and 6.4.12); relative error below 1e-10 from x = 6 on (derived
+ * (Abramowitz & Stegun 6.4.6 and 6.4.12); relative error below 1e-11 from x = 10 on (derived
  * from the size of the next term, 5/(66x¹¹)).
  */
 export function trigamma(x: number): number {
   requirePositive('x', x);
   let acc = 0;
   let z = x;
-  while (z < 6) {
+  while (z < 10) {
     acc += 1 / (z * z);
     z += 1;
   }

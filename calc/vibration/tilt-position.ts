@@ -14,7 +14,7 @@ import { G } from '../units/gravity.js';
 import { requireFiniteSamples } from './checks.js';
 import type { Samples } from './checks.js';
 import { tiltFromGravity } from './gravity-tilt.js';
-import { quantizationStep } from './sensor-limits.js';
+import { BROWSER_ACCELERATION_STEP_MPS2, quantizationStep } from './sensor-limits.js';
 
 /** Per-axis standard deviation, m/s², above which the phone was not still. Our choice (about 0.35° of scatter per reading), no source. */
 export const STILL_STD_MPS2 = 0.06;
@@ -115,7 +115,13 @@ export function measureTiltPosition(readings: GravityReadings): TiltPosition {
   const m = tilt.magnitudeMps2;
   // d(asin(ax/|a|)) ≈ dax/(|a|·cos θ) for a small change of ax alone (derived).
   const perMps2 = 1 / (m * Math.max(Math.cos(tilt.xRad), 1e-6));
-  const step = quantizationStep(x);
+  // The rounding step: from x alone, else from all three axes together (a browser rounds
+  // them alike), else — when x never changed at all — the browsers' 0.1 m/s² rounding, since
+  // a real sensor always shows some scatter (sensor-limits.ts).
+  const step =
+    quantizationStep(x) ??
+    quantizationStep([...Array.from(x), ...Array.from(y), ...Array.from(z)]) ??
+    (sx.std === 0 && x.length > 1 ? BROWSER_ACCELERATION_STEP_MPS2 : null);
   const statistical = batchMeanError(x) * perMps2;
   // Without dither (scatter below half a step) the mean of rounded readings keeps the rounding error.
   const rounding = step !== null && sx.std < step / 2 ? (step / Math.sqrt(12)) * perMps2 : 0;

@@ -115,7 +115,12 @@ function at(series: Float64Array, rateHz: number, t: number): number {
  * slow drift, rounding.
  */
 export function phoneRecord(
-  motion: { x: Float64Array | null; y: Float64Array | null; simulationRateHz: number; durationS: number },
+  motion: {
+    x: Float64Array | null;
+    y: Float64Array | null;
+    simulationRateHz: number;
+    durationS: number;
+  },
   s: PhoneSensorOptions,
   gravity = { x: 0.05, y: -0.08, z: 9.81 },
 ): PhoneRecord {
