@@ -8,6 +8,7 @@ import { posting } from './en/posting.js';
 import { fields } from './en/fields.js';
 import { result } from './en/result.js';
 import { map } from './en/map.js';
+import { instruments } from './en/instruments.js';
 
 /**
  * English catalogue. Each area of the app adds its own section file under en/ and spreads it
@@ -20,6 +21,7 @@ export const en = {
   ...fields,
   ...result,
   ...map,
+  ...instruments,
 } as const;
 
 export type MessageKey = keyof typeof en;
