@@ -6,7 +6,13 @@ import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 
-const benches = ['buildings.bench.ts', 'rocking.bench.ts', 'storage.bench.ts', 'cli.bench.ts'];
+const benches = [
+  'buildings.bench.ts',
+  'rocking.bench.ts',
+  'storage.bench.ts',
+  'cli.bench.ts',
+  'vibration.bench.ts',
+];
 
 const only = process.argv.slice(2);
 let failed = 0;
