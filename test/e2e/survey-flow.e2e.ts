@@ -117,6 +117,9 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     await page.getByLabel('Era of design (seismic code level)').selectOption('moderate');
     await page.getByLabel('Main use').selectOption('multi-family');
     await page.getByLabel('Kind of roof').selectOption('light');
+    // Each of the four defaults was chosen (one of them was already the default): none is
+    // left to confirm.
+    await page.getByRole('button', { name: 'Confirm the defaults' }).waitFor({ state: 'detached' });
     await page.getByRole('button', { name: 'Add a storey' }).click();
     await page.getByRole('button', { name: 'Add a storey' }).click();
     await expect(page.locator('.stepper__value').textContent()).resolves.toBe('2');
@@ -233,6 +236,14 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     await page.getByRole('link', { name: /See the verdict/ }).click();
     await page.getByRole('heading', { level: 1, name: 'Verdict' }).waitFor();
     await page.getByRole('heading', { name: 'Recommended posting and damage state' }).waitFor();
+    // Complete survey: a verdict, with its posting word and damage state, and the evidence.
+    const posting = await page.locator('.posting__word').textContent();
+    expect(posting).toMatch(/Open|Limited entry|Keep out/);
+    await expect(page.locator('.damage').textContent()).resolves.toMatch(
+      /Damage state:\s*(None|Slight|Moderate|Extensive|Complete)/,
+    );
+    await page.getByRole('list', { name: 'Seen on site' }).waitFor();
+    await page.getByRole('list', { name: 'Predicted from the hazard and the walls' }).waitFor();
     await page.getByRole('img', { name: /Response spectrum/ }).waitFor();
     await page.getByRole('img', { name: /Drift per storey/ }).waitFor();
     await page.getByRole('img', { name: /Rocking of wall 2X-1/ }).waitFor();
@@ -251,6 +262,8 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     const item = page.getByRole('link', { name: /7 Quarry Row, Upper Fennick/ });
     await item.waitFor();
     await expect(item.textContent()).resolves.toMatch(/Not exported/);
+    // The stored verdict shows in the list.
+    await expect(item.textContent()).resolves.toMatch(/Open|Limited entry|Keep out/);
     await page.getByLabel('Search buildings').fill('quarry fennick');
     await expect(item.isVisible()).resolves.toBe(true);
     await page.getByLabel('Search buildings').fill('harbour');

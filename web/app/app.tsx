@@ -16,9 +16,6 @@ const SettingsScreen = lazy(() =>
 const SurveyScreen = lazy(() =>
   import('../screens/survey/survey-screen.js').then((m) => m.SurveyScreen),
 );
-const ResultScreen = lazy(() =>
-  import('../screens/result/result-screen.js').then((m) => m.ResultScreen),
-);
 const MapScreen = lazy(() => import('../map/map-screen.js').then((m) => m.MapScreen));
 
 export function App() {
@@ -28,7 +25,6 @@ export function App() {
         <ErrorBoundary>
           <Router>
             <Route path="/" component={HomeScreen} />
-            <Route path="/survey/:id/result" component={ResultScreen} />
             <Route path="/survey/:id/:step?" component={SurveyScreen} />
             <Route path="/map" component={MapScreen} />
             <Route path="/settings" component={SettingsScreen} />

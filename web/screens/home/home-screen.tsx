@@ -4,22 +4,20 @@
  * Import / Export buttons of web/exchange in the header slot.
  */
 import { useEffect, useState } from 'preact/hooks';
-import { lazy, useLocation } from 'preact-iso';
+import type { ComponentType } from 'preact';
+import { useLocation } from 'preact-iso';
 import type { SurveyRecord } from '../../../forms/index.js';
 import { t, type MessageKey } from '../../i18n/index.js';
 import '../../styles/screens.css';
 import { CautionNote } from '../../app/caution-note.js';
 import { paths } from '../../app/routes.js';
-import { listSurveys } from '../../storage/index.js';
 import { BuildingItem } from './building-item.js';
 import { LIST_FILTERS, filterBuildings, type ListFilter } from './building-filter.js';
-import { createSurveyNow } from './create-survey.js';
-import { loadDemoTown } from './demo-town.js';
+import type { ExchangeActionsProps } from '../../exchange/exchange-actions.js';
 
-// The exchange buttons (zip, GeoJSON, CSV) are large: they load after the list is usable.
-const ExchangeActions = lazy(() =>
-  import('../../exchange/exchange-actions.js').then((m) => m.ExchangeActions),
-);
+// Storage, the demo town and the exchange buttons load after the first render, so the
+// screen is usable at once (a lazy() component would hold the whole route back instead).
+const data = () => import('./home-data.js');
 
 const filterLabels: Record<ListFilter, MessageKey> = {
   all: 'home.filter.all',
@@ -40,8 +38,10 @@ export function HomeScreen() {
   const [filter, setFilter] = useState<ListFilter>('all');
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
 
+  const [Exchange, setExchange] = useState<ComponentType<ExchangeActionsProps> | null>(null);
   const reload = () =>
-    listSurveys()
+    data()
+      .then((m) => m.listSurveys())
       .then((list) => {
         setRecords(list);
         setLoadError(null);
@@ -49,12 +49,15 @@ export function HomeScreen() {
       .catch((e: unknown) => setLoadError(t('home.loadFailed', { reason: String(e) })));
   useEffect(() => {
     void reload();
+    void import('../../exchange/exchange-actions.js')
+      .then((m) => setExchange(() => m.ExchangeActions))
+      .catch(() => undefined);
   }, []);
 
   const newSurvey = async () => {
     setStatus({ kind: 'busy', text: t('home.creating') });
     try {
-      const record = await createSurveyNow();
+      const record = await (await data()).createSurveyNow();
       route(paths.survey(record.id, 'place'));
     } catch (e) {
       setStatus({ kind: 'message', text: t('home.createFailed', { reason: String(e) }) });
@@ -62,7 +65,7 @@ export function HomeScreen() {
   };
   const demo = async () => {
     setStatus({ kind: 'busy', text: t('home.demoLoading') });
-    const outcome = await loadDemoTown();
+    const outcome = await (await data()).loadDemoTown();
     setStatus({ kind: 'message', text: outcome });
     void reload();
   };
@@ -150,10 +153,14 @@ export function HomeScreen() {
 
       <section class="card home__exchange" aria-labelledby="exchange-title">
         <h2 id="exchange-title">{t('home.exchangeSlot')}</h2>
-        <ExchangeActions
-          actions={['import', 'geojson', 'csv', 'zip']}
-          onImported={() => void reload()}
-        />
+        {Exchange ? (
+          <Exchange
+            actions={['import', 'geojson', 'csv', 'zip']}
+            onImported={() => void reload()}
+          />
+        ) : (
+          <p class="muted">{t('loading')}</p>
+        )}
       </section>
       <p>
         <button

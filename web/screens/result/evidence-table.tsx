@@ -1,48 +1,103 @@
 /**
- * Each piece of evidence with its value against its threshold. A value past its threshold
- * is marked with a symbol and the words "past the limit", not by colour alone.
+ * Each piece of evidence with its value against its threshold, predicted and observed in
+ * two lists. The value is shown in the chosen units; the sentence of the calculation says
+ * what follows from it. An item that sets a damage state names it; one past its threshold
+ * is marked with a symbol and words, not by colour alone.
  */
+import type { EvidenceItem } from '../../../calc/index.js';
+import { formatQuantity, shownUnit, type UnitSystem } from '../../../forms/units/index.js';
+import { damageStateLabels } from '../../app/posting-style.js';
 import { t } from '../../i18n/index.js';
 
-export interface EvidenceRow {
-  key: string;
-  label: string;
-  value: string;
-  threshold: string;
-  exceeds: boolean;
-  note?: string | undefined;
+function valueText(item: EvidenceItem, system: UnitSystem): string {
+  if (item.value === null) return item.valueText;
+  if (
+    item.unit === 'ratio' &&
+    (item.kind === 'residual-drift' || item.kind.startsWith('fragility'))
+  ) {
+    return `${formatQuantity(item.value, 'percent', 'si')} %`;
+  }
+  if (item.unit === 'm') {
+    const q = Math.abs(item.value) < 0.1 ? 'smallLength' : 'length';
+    return `${formatQuantity(item.value, q, system)} ${t(`unit.${shownUnit(q, system)}`)}`;
+  }
+  return item.valueText;
 }
 
-export function EvidenceTable({ rows }: { rows: readonly EvidenceRow[] }) {
+function passed(item: EvidenceItem): boolean {
+  return item.value !== null && item.threshold !== null && item.value >= item.threshold;
+}
+
+/** One list per side: on a phone a three-column table of long sentences does not fit. */
+function List(props: {
+  items: readonly EvidenceItem[];
+  system: UnitSystem;
+  title: string;
+  id: string;
+}) {
   return (
-    <table class="evidence">
-      <thead>
-        <tr>
-          <th scope="col">{t('result.evidence.what')}</th>
-          <th scope="col">{t('result.evidence.value')}</th>
-          <th scope="col">{t('result.evidence.threshold')}</th>
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((r) => (
-          <tr key={r.key} class={r.exceeds ? 'evidence__row--over' : undefined}>
-            <th scope="row">
-              {r.label}
-              {r.note && <span class="evidence__note">{r.note}</span>}
-            </th>
-            <td>
-              <strong>{r.value}</strong>
-              {r.exceeds && (
-                <span class="evidence__over">
-                  <span aria-hidden="true"> ▲ </span>
+    <div class="evidence">
+      <h3 class="subhead" id={props.id}>
+        {props.title}
+      </h3>
+      <ul class="evidence__list" aria-labelledby={props.id}>
+        {props.items.map((e) => (
+          <li key={e.id} class={passed(e) ? 'ev ev--over' : 'ev'}>
+            <p class="ev__head">
+              {e.label}
+              {e.where && <span class="ev__where"> · {e.where}</span>}
+            </p>
+            <p class="ev__value">
+              <strong>{valueText(e, props.system)}</strong>
+              {passed(e) && (
+                <span class="ev__over">
+                  {' '}
+                  <span aria-hidden="true">▲ </span>
                   {t('result.evidence.over')}
                 </span>
               )}
-            </td>
-            <td>{r.threshold}</td>
-          </tr>
+              {e.state !== null && e.state !== 'none' && (
+                <span class="ev__state"> → {t(damageStateLabels[e.state])}</span>
+              )}
+            </p>
+            <p class="ev__limit">
+              {t('result.evidence.threshold')}: {e.thresholdText}
+            </p>
+            <p class="ev__text">{e.text}</p>
+          </li>
         ))}
-      </tbody>
-    </table>
+      </ul>
+    </div>
+  );
+}
+
+export function EvidenceTables(props: {
+  predicted: readonly EvidenceItem[];
+  observed: readonly EvidenceItem[];
+  system: UnitSystem;
+}) {
+  return (
+    <>
+      {props.observed.length > 0 ? (
+        <List
+          items={props.observed}
+          system={props.system}
+          title={t('result.evidence.observed')}
+          id="evidence-observed"
+        />
+      ) : (
+        <p class="muted">{t('result.evidence.noneObserved')}</p>
+      )}
+      {props.predicted.length > 0 ? (
+        <List
+          items={props.predicted}
+          system={props.system}
+          title={t('result.evidence.predicted')}
+          id="evidence-predicted"
+        />
+      ) : (
+        <p class="muted">{t('result.evidence.nonePredicted')}</p>
+      )}
+    </>
   );
 }

@@ -1,47 +1,74 @@
 /**
- * Everything the result screen shows, computed from the record with what calc/ offers:
- * the storey model and its response (period, demand, drift, demand-to-capacity), and a
- * rocking assessment of every rocking wall (θ/α observed from the uplift gap and estimated
- * under the hazard). Pure; failures are caught and reported, never shown as numbers.
+ * Everything the result screen shows, computed from the record by calc/:
+ * - when the survey is complete enough to screen: `screen(record)` — the verdict, evidence,
+ *   directions, rocking walls, confidence and cautions;
+ * - before that: the storey model's response (period, demand, drift) and a rocking
+ *   assessment of every rocking wall, so the plots already say something; no verdict.
+ * Pure; a calculation that throws is reported with its message, never shown as numbers.
  */
 import {
   assessRockingWall,
   buildingResponse,
   rockingWallFromInput,
+  screen,
   type BuildingResponse,
   type RockingWallAssessment,
+  type ScreeningResult,
 } from '../../../calc/index.js';
 import type { SurveyRecord } from '../../../forms/index.js';
 
 export interface ResultModel {
+  screening: ScreeningResult | null;
   response: BuildingResponse | null;
-  /** Why the response could not be computed (a calc error message), or null. */
-  responseError: string | null;
+  /** Why the calculation could not run (its message), or null. */
+  error: string | null;
+  /** Before screening: rocking walls assessed on their own. */
   rocking: RockingWallAssessment[];
-  rockingErrors: { wallId: string; message: string }[];
 }
 
-export function computeResult(record: SurveyRecord): ResultModel {
+const message = (e: unknown) => (e instanceof Error ? e.message : String(e));
+
+/** The record's inputs, as one string: equal strings, equal results. */
+export function inputsKey(record: SurveyRecord): string {
+  const { notes: _notes, ...observations } = record.observations;
+  return JSON.stringify([
+    record.building,
+    record.walls,
+    observations,
+    record.hazard,
+    record.measured,
+    record.unconfirmed,
+    record.unparsed,
+  ]);
+}
+
+export function computeResult(record: SurveyRecord, ready: boolean): ResultModel {
+  if (ready) {
+    try {
+      const screening = screen(record);
+      return { screening, response: null, error: null, rocking: [] };
+    } catch (e) {
+      return { screening: null, response: null, error: message(e), rocking: [] };
+    }
+  }
   let response: BuildingResponse | null = null;
-  let responseError: string | null = null;
+  let error: string | null = null;
   try {
     response = buildingResponse(record);
   } catch (e) {
-    responseError = e instanceof Error ? e.message : String(e);
+    error = message(e);
   }
   const rocking: RockingWallAssessment[] = [];
-  const rockingErrors: { wallId: string; message: string }[] = [];
   for (const wall of record.walls) {
     if (wall.type !== 'rocking') continue;
     const storeyHeight = record.building.storeys[wall.storey]?.heightM;
     if (storeyHeight === undefined) continue;
     const gap = record.observations.uplift.find((u) => u.wallId === wall.id)?.gapM ?? null;
     try {
-      const model = rockingWallFromInput(wall, storeyHeight);
-      rocking.push(assessRockingWall(model, record.hazard, gap));
+      rocking.push(assessRockingWall(rockingWallFromInput(wall, storeyHeight), record.hazard, gap));
     } catch (e) {
-      rockingErrors.push({ wallId: wall.id, message: e instanceof Error ? e.message : String(e) });
+      error ??= `${wall.id}: ${message(e)}`;
     }
   }
-  return { response, responseError, rocking, rockingErrors };
+  return { screening: null, response, error, rocking };
 }

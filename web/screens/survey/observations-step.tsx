@@ -29,6 +29,8 @@ import {
 import { applyFieldChange, isPanelType, setUplift, upliftPendingKey } from './record-edit.js';
 import type { StepProps } from './step-context.js';
 import { PhotoSection } from './photo-section.js';
+// Phone instruments (web/instruments, owned by the instruments area).
+import * as phone from '../../instruments/index.js';
 
 const GAP = numberSpecFor('observations.uplift.0.gapM') as NumberSpec;
 const OFFSET = numberSpecFor('observations.residualDrift.0.offsetM') as NumberSpec;
@@ -168,6 +170,12 @@ function DriftReading(props: StepProps & { storey: number; direction: 'x' | 'y' 
         labelPrefix={`${name}:`}
         placeholder={t('obs.notMeasured')}
       />
+      <phone.TiltMeter
+        storey={storey}
+        direction={direction}
+        context={name}
+        onResult={(m) => edit((r) => phone.withPhoneTilt(r, storey, direction, m))}
+      />
       {tooLarge && (
         <p class="field__error" role="alert">
           <span aria-hidden="true">✖ </span>
@@ -266,6 +274,13 @@ export function ObservationsStep({ ctx }: StepProps) {
             )}
           </ol>
         )}
+      </section>
+      <section class="card" aria-label={t('instruments.vib.title')}>
+        <phone.VibrationRecorder
+          storey={Math.max(0, n - 1)}
+          expectedPeriodS={phone.expectedPeriodFor(record)}
+          onResult={(m, raw) => edit((r) => phone.withVibration(r, m, raw))}
+        />
       </section>
       <UpliftSection ctx={ctx} />
       <Checklist ctx={ctx} />

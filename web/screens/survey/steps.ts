@@ -25,6 +25,11 @@ export function stepFromParam(param: string | undefined): StepId {
   return (STEPS as readonly string[]).includes(param ?? '') ? (param as StepId) : 'place';
 }
 
+/** The step or the result for a URL segment. */
+export function pageFromParam(param: string | undefined): StepId | typeof RESULT_STEP {
+  return param === RESULT_STEP ? RESULT_STEP : stepFromParam(param);
+}
+
 /** Which step a record field path belongs to ('' and unknown paths: null). */
 export function stepOfPath(path: string): StepId | null {
   const head = path.split('.')[0] ?? '';

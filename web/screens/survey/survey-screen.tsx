@@ -7,6 +7,7 @@
 import { useEffect, useMemo, useRef } from 'preact/hooks';
 import '../../styles/screens.css';
 import { useSurveyDraft, type SurveyDraft } from '../../storage/index.js';
+import type { SurveyRecord } from '../../../forms/index.js';
 import { backupUnsaved, dropBackup, takeBackup } from './unsaved-backup.js';
 import { t } from '../../i18n/index.js';
 import { paths } from '../../app/routes.js';
@@ -20,7 +21,11 @@ import { SaveIndicator } from './save-indicator.js';
 import { StepBar } from './step-bar.js';
 import type { StepContext } from './step-context.js';
 import { stepIssues } from './step-issues.js';
-import { STEPS, stepFromParam, stepLabels, type StepId } from './steps.js';
+import { RESULT_STEP, STEPS, pageFromParam, stepLabels, type StepId } from './steps.js';
+import { computeResult, inputsKey } from '../result/result-model.js';
+import { ResultView } from '../result/result-view.js';
+import { readyToScreen } from './step-issues.js';
+import { CALC_VERSION } from '../../../calc/index.js';
 import { WallsStep } from './walls-step.js';
 import { DraftNotices } from './draft-notices.js';
 
@@ -61,13 +66,36 @@ const STEP_COMPONENTS: Record<StepId, (p: { ctx: StepContext }) => preact.JSX.El
 
 export function SurveyScreen(props: { params: { id?: string; step?: string } }) {
   const id = props.params.id ?? '';
-  const step = stepFromParam(props.params.step);
+  const page = pageFromParam(props.params.step);
   const draft = useSurveyDraft(id);
   const system = useUnits();
   const heading = useRef<HTMLHeadingElement>(null);
   const record = draft.record;
   useUnsavedBackup(draft);
   const issues = useMemo(() => (record ? stepIssues(record, system) : null), [record, system]);
+  const ready = issues !== null && readyToScreen(issues);
+  // The result depends on the inputs only: storing it must not run the calculation again.
+  const key = record ? inputsKey(record) : '';
+  const model = useMemo(
+    () => (record && page === RESULT_STEP ? computeResult(record, ready) : null),
+    [key, ready, page === RESULT_STEP],
+  );
+
+  // The verdict shown is the verdict stored: the building list, the map and the exports
+  // read it from the record.
+  useEffect(() => {
+    const s = model?.screening;
+    if (!record || !s || page !== RESULT_STEP) return;
+    if (record.result && JSON.stringify(record.result.result) === JSON.stringify(s)) return;
+    draft.update((r) => ({
+      ...r,
+      result: {
+        calcVersion: CALC_VERSION,
+        computedAt: new Date().toISOString(),
+        result: s as unknown as NonNullable<typeof r.result>['result'],
+      },
+    }));
+  }, [model]);
 
   // A new step starts at its heading: scrolled to the top, focus there for the keyboard.
   const firstRender = useRef(true);
@@ -78,7 +106,7 @@ export function SurveyScreen(props: { params: { id?: string; step?: string } }) 
     }
     window.scrollTo(0, 0);
     heading.current?.focus({ preventScroll: true });
-  }, [step]);
+  }, [page]);
 
   if (draft.loading) {
     return (
@@ -101,16 +129,27 @@ export function SurveyScreen(props: { params: { id?: string; step?: string } }) 
     );
   }
 
-  const ctx: StepContext = { record, edit: (fn) => draft.update(fn), system };
-  const index = STEPS.indexOf(step);
-  const prev = STEPS[index - 1];
-  const next = STEPS[index + 1];
+  // Any change to an input makes a stored verdict stale: it is removed, so the list and
+  // the exports never show a verdict the inputs no longer support (revisions keep it).
+  const edit = (fn: (r: SurveyRecord) => SurveyRecord) =>
+    draft.update((r) => {
+      const next = fn(r);
+      return next.result !== null && inputsKey(next) !== inputsKey(r)
+        ? { ...next, result: null }
+        : next;
+    });
+  const ctx: StepContext = { record, edit, system };
+  const isResult = page === RESULT_STEP;
+  const step: StepId = isResult ? 'hazard' : page;
+  const index = isResult ? STEPS.length : STEPS.indexOf(step);
+  const prev = isResult ? 'hazard' : STEPS[index - 1];
+  const next = isResult ? undefined : STEPS[index + 1];
   const Step = STEP_COMPONENTS[step];
-  const stepName = t(stepLabels[step]);
+  const stepName = t(stepLabels[isResult ? RESULT_STEP : step]);
 
   return (
     <main class="screen survey" id="main">
-      <div class="survey__top">
+      <div class="survey__top no-print">
         <p class="survey__address">
           {record.address.trim() === '' ? t('survey.untitled') : record.address}
         </p>
@@ -121,16 +160,24 @@ export function SurveyScreen(props: { params: { id?: string; step?: string } }) 
         />
       </div>
       <DraftNotices draft={draft} />
-      <StepBar id={record.id} current={step} issues={issues} />
+      <StepBar id={record.id} current={page} issues={issues} />
       <h1 ref={heading} tabIndex={-1} class="survey__heading">
-        <span class="survey__kicker">
-          {t('survey.stepOf', { n: index + 1, total: STEPS.length })}
-        </span>
+        {!isResult && (
+          <span class="survey__kicker">
+            {t('survey.stepOf', { n: index + 1, total: STEPS.length })}
+          </span>
+        )}
         {stepName}
       </h1>
-      <IssueSummary issues={issues[step]} stepName={stepName} />
-      <Step ctx={ctx} />
-      <nav class="step-nav" aria-label={t('steps.prevNext')}>
+      {isResult && model ? (
+        <ResultView record={record} model={model} issues={issues} ready={ready} system={system} />
+      ) : (
+        <>
+          <IssueSummary issues={issues[step]} stepName={stepName} />
+          <Step ctx={ctx} />
+        </>
+      )}
+      <nav class="step-nav no-print" aria-label={t('steps.prevNext')}>
         {prev ? (
           <a class="button" href={paths.survey(record.id, prev)}>
             <span aria-hidden="true">← </span>
@@ -144,6 +191,8 @@ export function SurveyScreen(props: { params: { id?: string; step?: string } }) 
             {t('steps.next', { step: t(stepLabels[next]) })}
             <span aria-hidden="true"> →</span>
           </a>
+        ) : isResult ? (
+          <span />
         ) : (
           <a class="button button--primary" href={paths.result(record.id)}>
             {t('steps.toResult')}
