@@ -12,6 +12,7 @@ const benches = [
   'storage.bench.ts',
   'cli.bench.ts',
   'vibration.bench.ts',
+  'first-screen.bench.ts',
 ];
 
 const only = process.argv.slice(2);
