@@ -23,6 +23,8 @@ export interface TiltMeterProps {
   direction?: Direction | null;
   /** Open at once instead of showing a single button. */
   initiallyOpen?: boolean;
+  /** What the reading is for (e.g. "Storey 1, along x"), added to the button's accessible name. */
+  context?: string;
 }
 
 /** Re-render at most this often while readings stream in, ms (our choice: 10 per second). */
@@ -33,6 +35,7 @@ export function TiltMeter({
   storey = null,
   direction = null,
   initiallyOpen = false,
+  context,
 }: TiltMeterProps) {
   const [open, setOpen] = useState(initiallyOpen);
   const session = useMemo(() => new TiltSession(), []);
@@ -76,6 +79,7 @@ export function TiltMeter({
           }}
         >
           {t('instruments.tilt.open')}
+          {context && <span class="visually-hidden"> ({context})</span>}
         </button>
       </div>
     );
