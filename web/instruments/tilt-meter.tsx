@@ -128,7 +128,14 @@ export function TiltMeter({
                   ? t('instruments.tilt.settling')
                   : t('instruments.tilt.averaging', { percent: Math.round(view.progress * 100) })}
               </p>
-              <progress class="instrument__progress" max={1} value={view.progress} />
+              <progress
+                class="instrument__progress"
+                max={1}
+                value={view.progress}
+                aria-label={t('instruments.tilt.averaging', {
+                  percent: Math.round(view.progress * 100),
+                })}
+              />
               <button type="button" class="button button--wide" onClick={() => session.cancel()}>
                 {t('instruments.tilt.cancel')}
               </button>

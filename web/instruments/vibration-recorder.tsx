@@ -232,7 +232,15 @@ export function VibrationRecorder(props: VibrationRecorderProps) {
               total: progress.durationS,
             })}
           </p>
-          <progress class="instrument__progress" max={1} value={progress.progress} />
+          <progress
+            class="instrument__progress"
+            max={1}
+            value={progress.progress}
+            aria-label={t('instruments.vib.recording', {
+              elapsed: Math.floor(progress.elapsedS),
+              total: progress.durationS,
+            })}
+          />
           <p class="instrument__note">
             {t('instruments.vib.rate', {
               count: progress.sampleCount,
