@@ -43,6 +43,7 @@ const SEED = 20_250_304;
 declare global {
   interface Window {
     __readyAt?: number;
+    __buttonAt?: number;
   }
 }
 
@@ -56,17 +57,25 @@ const WATCH_READY = `(() => {
     document.getElementById('blank-ready') !== null ||
     ([...document.querySelectorAll('button')].some((b) => (b.textContent || '').includes('New survey')) &&
       document.querySelector('.home__empty, .home__tools') !== null);
+  const button = () =>
+    document.getElementById('blank-ready') !== null ||
+    [...document.querySelectorAll('button')].some((b) => (b.textContent || '').includes('New survey'));
   const check = () => {
+    if (window.__buttonAt === undefined && button()) window.__buttonAt = performance.now();
     if (window.__readyAt === undefined && ready()) window.__readyAt = performance.now();
   };
   new MutationObserver(check).observe(document, { childList: true, subtree: true });
 })();`;
 
-async function loadTime(page: Page, url: string): Promise<{ ready: number; load: number }> {
+async function loadTime(
+  page: Page,
+  url: string,
+): Promise<{ ready: number; button: number; load: number }> {
   await page.goto(url, { waitUntil: 'load' });
   await page.waitForFunction(() => window.__readyAt !== undefined, undefined, { timeout: 30_000 });
   return page.evaluate(() => ({
     ready: window.__readyAt as number,
+    button: window.__buttonAt as number,
     load: performance.getEntriesByType('navigation')[0]?.duration ?? NaN,
   }));
 }
@@ -98,12 +107,14 @@ async function compare(page: Page, origin: string, label: string): Promise<void>
   await loadTime(page, `${origin}/blank.html`);
   const app: number[] = [];
   const appLoad: number[] = [];
+  const appButton: number[] = [];
   const blank: number[] = [];
   for (const which of order) {
     const t = await loadTime(page, which === 'app' ? `${origin}/` : `${origin}/blank.html`);
     if (which === 'app') {
       app.push(t.ready);
       appLoad.push(t.load);
+      appButton.push(t.button);
     } else blank.push(t.ready);
   }
   const a = median(app);
@@ -111,6 +122,9 @@ async function compare(page: Page, origin: string, label: string): Promise<void>
   console.log(`\n${label}`);
   console.log(
     `  building list interactive  median ${fmt(a)}  (min ${fmt(Math.min(...app))}, max ${fmt(Math.max(...app))}); load event ${fmt(median(appLoad))}`,
+  );
+  console.log(
+    `  "New survey" rendered       median ${fmt(median(appButton))}  (ratio ${(median(appButton) / b).toFixed(2)} ×)`,
   );
   console.log(
     `  blank page ready           median ${fmt(b)}  (min ${fmt(Math.min(...blank))}, max ${fmt(Math.max(...blank))})`,

@@ -4,7 +4,7 @@
  * switch to US units. Every screen is saved as a screenshot (test/output/screenshots/flow-*)
  * to be looked at.
  */
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import {
@@ -251,6 +251,16 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     expect(period).toMatch(/Period along x\s*\d+\.\d\d s/);
     await expect(page.getByText('Screening estimate only').first().isVisible()).resolves.toBe(true);
     await shoot(page, '07-result');
+  });
+
+  it('prints the result as a one-page building report', async () => {
+    const pdf = await page.pdf({ format: 'A4', printBackground: true });
+    writeFileSync(`${screenshotDir}flow-report.pdf`, pdf);
+    const pages = pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? [];
+    expect(pages.length).toBe(1);
+    await page.emulateMedia({ media: 'print' });
+    await page.screenshot({ path: `${screenshotDir}flow-07-report-print.png`, fullPage: true });
+    await page.emulateMedia({ media: 'screen' });
   });
 
   it('lists the building with its address and the not-exported marker, and finds it by search', async () => {

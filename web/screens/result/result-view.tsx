@@ -296,7 +296,8 @@ export function ResultView(props: {
           </>
         )}
         {missing.length > 0 && (
-          <>
+          // In print the confidence statement of the verdict names the missing inputs.
+          <div class={s ? 'print-skip' : undefined}>
             <h3 class="subhead">{t('result.missingTitle')}</h3>
             <ul class="assumptions">
               {missing.map((m, i) => (
@@ -306,7 +307,7 @@ export function ResultView(props: {
                 </li>
               ))}
             </ul>
-          </>
+          </div>
         )}
         {assumptions.length > 0 && (
           <details class="more">
