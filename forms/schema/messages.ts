@@ -80,6 +80,14 @@ export interface StorageMessages {
   photoUnreadable: string;
   damagedRow: string;
   invalidBatch(count: number): string;
+  /** Button: save the records kept apart as a file. */
+  exportQuarantined: string;
+  /** Button: hide a storage notice for now. */
+  hideNotice: string;
+  /** Button: reload this tab. */
+  reloadNow: string;
+  /** Said when the records kept apart could not be exported. */
+  exportQuarantinedFailed(detail: string): string;
 }
 
 export interface MessageCatalogue {
@@ -295,7 +303,7 @@ export const en: MessageCatalogue = {
     quarantined: (n) =>
       n === 1
         ? 'One stored record could not be read. It is kept apart, unchanged, and can be exported.'
-        : `${n} stored records could not be read. They are kept apart, unchanged, and can be exported.`,
+        : `${n.toLocaleString('en')} stored records could not be read. They are kept apart, unchanged, and can be exported.`,
     photoUnreadable: 'This photo could not be read. Try another photo or take it again.',
     damagedRow:
       'The stored copy is damaged: its envelope is missing or does not match the record inside.',
@@ -303,6 +311,11 @@ export const en: MessageCatalogue = {
       n === 1
         ? 'One record is not valid, so none of them were written.'
         : `${n} records are not valid, so none of them were written.`,
+    exportQuarantined: 'Export them',
+    hideNotice: 'Hide',
+    reloadNow: 'Reload this tab',
+    exportQuarantinedFailed: (detail) =>
+      `The records kept apart could not be exported (${detail}). Try again.`,
   },
   direction: (d) => (d === 'x' ? 'x' : 'y'),
 };

@@ -6,13 +6,15 @@
  *   `getSurvey`, `listSurveys`, `listByOutcome`, `listInCell`, `listUpdatedSince`,
  *   `getRevisions`, `saveDraft`, `writeRevisions` (many revisions and current pointers in
  *   one all-or-nothing transaction), `markExported`, `listQuarantined`,
- *   `exportQuarantined`, `checkIntegrity`, photos, settings, `getDeviceId`,
+ *   `exportQuarantined`, `countUnreadable`, `checkIntegrity`, photos, settings, `getDeviceId`,
  *   `storageStatus` (usage, quota, persistence, eviction warning), `onNotice`.
  * - Module functions over the page's store (default-store.ts): `listSurveys`, `getSurvey`,
  *   `getRevisions`, `writeRevisions`, `listQuarantined`, `exportQuarantined`,
  *   `createSurvey`, `markExported`, `storageStatus`, `onStorageNotice`, `getDefaultStore`.
  * - `DraftSaver` (draft-saver.ts) and `useSurveyDraft(id)` (use-survey-draft.ts) —
  *   autosave within 300 ms, flush on hide, conflict handling between tabs.
+ * - `StorageNotices` (storage-notices.tsx) — records kept apart (with export), reload after
+ *   another tab's upgrade, upgrade blocked by an older tab: shown by the app shell.
  * - Photos (photos.ts, jpeg-exif.ts) — downscale on the device, location EXIF stripped
  *   unless kept.
  * - `StorageError` (errors.ts) — failures with a sentence saying what to do.
@@ -56,6 +58,7 @@ export type {
   SaveState,
 } from './draft-saver.js';
 export { useSurveyDraft } from './use-survey-draft.js';
+export { StorageNotices } from './storage-notices.js';
 export type { SurveyDraft } from './use-survey-draft.js';
 export type { StoreNotice } from './connection.js';
 export { StorageError, isQuotaError, NEAR_QUOTA_BYTES, NEAR_QUOTA_FRACTION } from './errors.js';

@@ -470,6 +470,23 @@ export class SurveyStore {
     return this.read((db) => db.count('quarantine'));
   }
 
+  /**
+   * Stored records that could not be read (quarantined from surveys, revisions or
+   * settings). Drafts kept aside while a form is not yet valid are left out: the form shows
+   * those at the fields.
+   */
+  async countUnreadable(): Promise<number> {
+    const [all, drafts] = await this.read((db) =>
+      inTransaction(db, ['quarantine'], 'readonly', (tx) =>
+        Promise.all([
+          tx.store.count(),
+          tx.store.index('sourceKey').count(IDBKeyRange.bound(['draft'], ['draft', []])),
+        ]),
+      ),
+    );
+    return all - drafts;
+  }
+
   /** The quarantine as JSON text (see json-safe.ts for non-JSON values), for export. */
   async exportQuarantined(): Promise<string> {
     const entries = await this.listQuarantined();
@@ -737,16 +754,29 @@ export class SurveyStore {
     return good.sort((a, b) => a.seq - b.seq);
   }
 
-  /** Moves unreadable current rows to the quarantine (re-checked inside the transaction). */
+  /**
+   * Moves unreadable current rows to the quarantine, re-checked inside the transaction (a
+   * row may have been fixed or removed since it was read). The requests are queued
+   * together, not one round trip each: a damaged store may hold thousands of such rows.
+   */
   private async quarantineCurrent(ids: readonly string[]): Promise<void> {
     const moved = await this.write((db) =>
       inTransaction(db, ['surveys', 'quarantine'], 'readwrite', async (tx) => {
-        let n = 0;
-        for (const id of ids) {
-          const r = await this.readCurrentInTx(tx, id);
-          if (r.kind === 'quarantined') n++;
-        }
-        return n;
+        const surveys = tx.objectStore('surveys');
+        const raws: unknown[] = await Promise.all(ids.map((id) => quiet(surveys.get(id))));
+        const writes: Promise<unknown>[] = [];
+        ids.forEach((id, i) => {
+          const raw = raws[i];
+          if (raw === undefined) return;
+          const r = readSurveyRow(raw, id, this.catalogue);
+          if (r.ok) return;
+          writes.push(
+            quiet(this.quarantineInTx(tx, 'surveys', id, raw, r.reason, r.messages)),
+            quiet(surveys.delete(id)),
+          );
+        });
+        await Promise.all(writes);
+        return writes.length / 2;
       }),
     );
     if (moved > 0) this.notifyQuarantined(moved);
