@@ -1,8 +1,11 @@
 /**
  * Runs the ambient-vibration analysis off the main thread: a Web Worker
  * (vibration-worker.ts) that imports calc/. Where workers are unavailable or fail (old
- * browsers, tests in Node), the same calc function runs here instead, loaded on demand.
+ * browsers, tests in Node), the same calc function runs here instead. (A static import: the
+ * instruments' chunk loads lazily with the survey screen, and a dynamic one made the
+ * bundler hoist calc helpers shared with the first screen into the vibration chunk.)
  */
+import { analyseAmbientRecord } from '../../calc/index.js';
 import type { AmbientAnalysis, Direction } from '../../calc/index.js';
 
 /** What the worker is sent: the raw record (times in s) and the comparison settings. */
@@ -21,7 +24,8 @@ export type AnalysisReply =
   { ok: true; analysis: AmbientAnalysis } | { ok: false; message: string };
 
 async function inline(request: AnalysisRequest): Promise<AmbientAnalysis> {
-  const { analyseAmbientRecord } = await import('../../calc/vibration/index.js');
+  // Yield once so the "analysing" state can render before the main thread is busy.
+  await new Promise((resolve) => setTimeout(resolve, 0));
   return analyseAmbientRecord(request);
 }
 

@@ -295,9 +295,14 @@ export function VibrationRecorder(props: VibrationRecorderProps) {
                 </p>
               )}
               <p class="instrument__note">
-                {e.dampingRatio !== null
-                  ? t('instruments.vib.damping', { percent: fixed(e.dampingRatio * 100, 1) })
-                  : t('instruments.vib.noDamping')}
+                {e.dampingRatio === null
+                  ? t('instruments.vib.noDamping')
+                  : e.dampingUncertainty === null
+                    ? t('instruments.vib.damping', { percent: fixed(e.dampingRatio * 100, 1) })
+                    : t('instruments.vib.dampingWithError', {
+                        percent: fixed(e.dampingRatio * 100, 1),
+                        uncertainty: fixed(e.dampingUncertainty * 100, 1),
+                      })}
               </p>
               <p class="instrument__note">
                 {t('instruments.vib.confidence', { percent: Math.round(e.confidence * 100) })}

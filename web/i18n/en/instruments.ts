@@ -74,6 +74,8 @@ export const instruments = {
   'instruments.vib.estimate': 'Fundamental frequency {frequency} Hz (period {period} s)',
   'instruments.vib.uncertainty': 'Standard error ± {uncertainty} Hz',
   'instruments.vib.damping': 'Damping {percent} % (half-power bandwidth)',
+  'instruments.vib.dampingWithError':
+    'Damping {percent} % ± {uncertainty} % (half-power bandwidth)',
   'instruments.vib.noDamping': 'Damping not measurable from this peak.',
   'instruments.vib.confidence': 'Confidence {percent} %',
   'instruments.vib.direction': 'Direction: plan {direction}',
