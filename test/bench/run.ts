@@ -10,6 +10,8 @@ const benches = [
   'buildings.bench.ts',
   'rocking.bench.ts',
   'storage.bench.ts',
+  'exchange.bench.ts',
+  'map.bench.ts',
   'cli.bench.ts',
   'vibration.bench.ts',
   'first-screen.bench.ts',

@@ -68,7 +68,9 @@ describe('offline map', () => {
     await page.reload();
     await page.locator('.gl-cluster-icon').first().waitFor({ timeout: 20_000 });
     await page.waitForTimeout(500);
-    expect(await page.locator('[data-testid=map-status]').textContent()).toBe('Surveys: 400');
+    await expect
+      .poll(() => page.locator('[data-testid=map-status]').textContent())
+      .toBe('Surveys: 400');
     expect(await page.locator('.gl-grid line').count()).toBeGreaterThan(3);
     expect(await page.locator('.gl-grid text').first().textContent()).toMatch(/° [NSEW]$/);
     expect(await page.locator('.leaflet-control-scale-line').first().textContent()).toMatch(
@@ -130,9 +132,9 @@ describe('offline map', () => {
     await page.locator('.gl-cluster-icon, .gl-marker-icon').first().waitFor();
     const keepOut = COUNTS.posting.get('keep-out') ?? 0;
     await page.locator('.gl-chip', { hasText: 'Keep out' }).click();
-    expect(await page.locator('[data-testid=map-status]').textContent()).toBe(
-      `Showing ${keepOut} of 400 surveys`,
-    );
+    await expect
+      .poll(() => page.locator('[data-testid=map-status]').textContent())
+      .toBe(`Showing ${keepOut} of 400 surveys`);
     await page.getByRole('button', { name: /^Filters/ }).click();
     const panel = page.locator('.gl-map-side.is-open');
     await panel.waitFor();

@@ -15,12 +15,13 @@
 import type { SurveyRecord } from '../../forms/index.js';
 import { shortCaution } from './export-cautions.js';
 import { CSV_MEDIA_TYPE, fileStamp } from './export-format.js';
-import { readVerdict } from './survey-verdict.js';
+import { readVerdict, type SurveyVerdict } from './survey-verdict.js';
 
 type Cell = string | number | boolean | null;
+type Row = (r: SurveyRecord, caution: string, v: SurveyVerdict) => Cell;
 
 /** The columns, in order: header name and how to read it from a record. */
-const COLUMNS: ReadonlyArray<readonly [string, (r: SurveyRecord, caution: string) => Cell]> = [
+const COLUMNS: ReadonlyArray<readonly [string, Row]> = [
   ['survey_id', (r) => r.id],
   ['revision', (r) => r.revision],
   ['address', (r) => text(r.address)],
@@ -38,9 +39,9 @@ const COLUMNS: ReadonlyArray<readonly [string, (r: SurveyRecord, caution: string
   ['occupancy', (r) => r.building.occupancy],
   ['storeys', (r) => r.building.storeys.length],
   ['walls', (r) => r.walls.length],
-  ['posting', (r) => readVerdict(r).posting],
-  ['damage_state', (r) => readVerdict(r).damageState],
-  ['needs_assessment', (r) => readVerdict(r).needsAssessment],
+  ['posting', (_r, _c, v) => v.posting],
+  ['damage_state', (_r, _c, v) => v.damageState],
+  ['needs_assessment', (_r, _c, v) => v.needsAssessment],
   ['calc_version', (r) => r.result?.calcVersion ?? null],
   ['computed_at', (r) => r.result?.computedAt ?? null],
   ['schema_version', (r) => r.schemaVersion],
@@ -73,11 +74,12 @@ export function csvParts(records: readonly SurveyRecord[]): string[] {
   const caution = shortCaution();
   const parts: string[] = [CSV_COLUMNS.map(csvField).join(',') + '\r\n'];
   for (const record of records) {
+    const verdict = readVerdict(record);
     let line = '';
     for (let c = 0; c < COLUMNS.length; c++) {
       const column = COLUMNS[c] as (typeof COLUMNS)[number];
       if (c > 0) line += ',';
-      line += csvField(column[1](record, caution));
+      line += csvField(column[1](record, caution, verdict));
     }
     parts.push(line + '\r\n');
   }

@@ -46,6 +46,13 @@ export interface ConflictFlag {
   foundAt: string;
 }
 
+/**
+ * Settings key stamped after every import that wrote something. Imported records can carry
+ * an old `updatedAt`, so a cache that looks for "saved since" (the map's) must rebuild when
+ * this stamp changed.
+ */
+export const IMPORT_STAMP_SETTING = 'exchange.importedAt';
+
 /** Settings key under which import conflicts are listed for the map and the list. */
 export const CONFLICTS_SETTING = 'exchange.conflicts';
 

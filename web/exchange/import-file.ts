@@ -19,8 +19,8 @@
 import { unzipSync } from 'fflate';
 import type { SurveyRecord } from '../../forms/index.js';
 import { t } from '../i18n/index.js';
-import { sameSurveyContent } from './content-hash.js';
-import { addConflictFlags, type ExchangeStore } from './exchange-store.js';
+import { sameSurveyContent } from './same-content.js';
+import { IMPORT_STAMP_SETTING, addConflictFlags, type ExchangeStore } from './exchange-store.js';
 import { readExchangeText, type RejectedFeature } from './geojson-import.js';
 import { planMerge, type ExistingSurvey } from './merge-plan.js';
 import { ZIP_ENTRIES } from './zip-export.js';
@@ -201,6 +201,12 @@ export async function importText(
     }
   }
   const foundAt = now.toISOString();
+  if (writes.length > 0) {
+    // Caches of "what changed since" must rebuild (see IMPORT_STAMP_SETTING).
+    await store
+      .setSetting(IMPORT_STAMP_SETTING, `${foundAt}#${Math.random().toString(36).slice(2)}`)
+      .catch(() => undefined);
+  }
   try {
     await addConflictFlags(
       store,

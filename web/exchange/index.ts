@@ -66,6 +66,7 @@ export {
 } from './import-file.js';
 export {
   CONFLICTS_SETTING,
+  IMPORT_STAMP_SETTING,
   readConflictFlags,
   type ConflictFlag,
   type ExchangeStore,

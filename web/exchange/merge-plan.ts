@@ -17,7 +17,7 @@
  * writes it in one transaction.
  */
 import type { SurveyRecord } from '../../forms/index.js';
-import { sameSurveyContent, surveyContentHash } from './content-hash.js';
+import { sameSurveyContent } from './same-content.js';
 
 /** What the device holds for one survey id. */
 export interface ExistingSurvey {
@@ -50,7 +50,6 @@ export interface MergePlan {
 
 interface Slot {
   record: SurveyRecord;
-  hash: number;
 }
 
 /** Groups by revision number: the holder and any kept variants. */
@@ -61,11 +60,11 @@ interface IdState {
 }
 
 function slot(record: SurveyRecord): Slot {
-  return { record, hash: surveyContentHash(record) };
+  return { record };
 }
 
 function sameSlot(a: Slot, b: Slot): boolean {
-  return a.hash === b.hash && sameSurveyContent(a.record, b.record);
+  return sameSurveyContent(a.record, b.record);
 }
 
 /** Plans the merge of `incoming` (in file order) into what the device holds. */

@@ -10,7 +10,8 @@
 import * as L from 'leaflet';
 import 'leaflet/dist/leaflet.css';
 import { t } from '../i18n/index.js';
-import { ClusterIndex, CLUSTER_MAX_ZOOM, type ClusterItem } from './cluster-index.js';
+import { CLUSTER_MAX_ZOOM, type ClusterItem } from './cluster-index.js';
+import { ClusterClient } from './cluster-client.js';
 import { CoordinateGrid } from './coordinate-grid.js';
 import type { MapPoint } from './map-points.js';
 import {
@@ -88,7 +89,15 @@ class TextAttribution extends L.Control {
   }
 }
 
-export function createMapView(container: HTMLElement, callbacks: MapViewCallbacks): MapView {
+/**
+ * Creates the map in `container`. `clusters` may be passed in already started (the screen
+ * starts the clustering worker while the surveys and Leaflet are still loading).
+ */
+export function createMapView(
+  container: HTMLElement,
+  callbacks: MapViewCallbacks,
+  clusters: ClusterClient = new ClusterClient(),
+): MapView {
   const map = L.map(container, {
     center: WORLD,
     zoom: 2,
@@ -112,7 +121,7 @@ export function createMapView(container: HTMLElement, callbacks: MapViewCallback
 
   const markers = L.layerGroup().addTo(map);
   let points: readonly MapPoint[] = [];
-  let index: ClusterIndex | null = null;
+  let renderSeq = 0;
   let selected: string | null = null;
   let basemap: L.Layer | null = null;
 
@@ -155,31 +164,34 @@ export function createMapView(container: HTMLElement, callbacks: MapViewCallback
     const clusterId = item.clusterId;
     const at = L.latLng(item.lat, item.lon);
     m.on('click', () => {
-      const zoom = index
-        ? Math.min(index.expansionZoom(clusterId), CLUSTER_MAX_ZOOM + 1)
-        : map.getZoom() + 2;
-      map.flyTo(at, zoom, { duration: 0.4 });
+      void clusters.expansionZoom(clusterId).then((z) => {
+        map.flyTo(at, Math.min(z ?? map.getZoom() + 2, CLUSTER_MAX_ZOOM + 1), { duration: 0.4 });
+      });
     });
     return m;
   }
 
-  function render(): void {
-    if (!index) {
+  async function render(): Promise<void> {
+    const seq = ++renderSeq;
+    if (points.length === 0) {
       markers.clearLayers();
       shown.clear();
       callbacks.onRendered?.(0);
       return;
     }
     const b = map.getBounds().pad(0.25);
-    const items = index.itemsIn(
+    const zoom = map.getZoom();
+    const items = await clusters.itemsIn(
       [
         Math.max(-180, b.getWest()),
         Math.max(-85, b.getSouth()),
         Math.min(180, b.getEast()),
         Math.min(85, b.getNorth()),
       ],
-      map.getZoom(),
+      zoom,
     );
+    // A newer view or a new set of points came meanwhile: its own render draws it.
+    if (items === null || seq !== renderSeq || zoom !== map.getZoom()) return;
     // Keep markers that are still shown (no flicker, focus stays), add new, drop old.
     const next = new Set<string>();
     for (const item of items) {
@@ -211,7 +223,7 @@ export function createMapView(container: HTMLElement, callbacks: MapViewCallback
     markStreetZoom();
   });
   markStreetZoom();
-  map.on('moveend', render);
+  map.on('moveend', () => void render());
 
   function dataBounds(): L.LatLngBounds | null {
     if (points.length === 0) return null;
@@ -258,11 +270,12 @@ export function createMapView(container: HTMLElement, callbacks: MapViewCallback
   return {
     setPoints(next, fit) {
       points = next;
-      index = next.length > 0 ? new ClusterIndex(next) : null;
       markers.clearLayers();
       shown.clear();
+      // Load first: the worker answers in order, so the renders below see the new points.
+      void clusters.load(next);
       if (fit) fitToData();
-      render();
+      void render();
     },
     setSelected(id) {
       if (id === selected) return;
@@ -316,6 +329,7 @@ export function createMapView(container: HTMLElement, callbacks: MapViewCallback
       map.invalidateSize();
     },
     destroy() {
+      clusters.dispose();
       map.remove();
     },
   };

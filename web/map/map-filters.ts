@@ -85,6 +85,18 @@ export function facetCounts(points: readonly Summary[], filter: MapFilter): Face
     inspector: new Map(),
     assessment: new Map(),
   };
+  if (isUnfiltered(filter)) {
+    // No filter (the map as it opens): every survey counts under each of its values.
+    const bump = (m: Map<string, number>, v: string) => m.set(v, (m.get(v) ?? 0) + 1);
+    for (const p of points) {
+      bump(counts.posting, p.posting);
+      bump(counts.damage, p.damage);
+      bump(counts.system, p.system);
+      bump(counts.inspector, p.inspector);
+      bump(counts.assessment, p.needsAssessment ? 'needed' : 'not-needed');
+    }
+    return counts;
+  }
   for (const point of points) {
     if (filter.from !== null && point.day < filter.from) continue;
     if (filter.to !== null && point.day > filter.to) continue;

@@ -14,6 +14,7 @@ import { ExchangeActions, deviceStore } from '../exchange/index.js';
 import type { SurveyRecord } from '../../forms/index.js';
 import { t } from '../i18n/index.js';
 import { BasemapPanel } from './basemap-panel.js';
+import { ClusterClient } from './cluster-client.js';
 import { deleteBasemap, listBasemaps, putBasemap, type StoredBasemap } from './basemap-store.js';
 import { FilterPanel } from './filter-panel.js';
 import type { MapView, TileStatus } from './leaflet-view.js';
@@ -25,6 +26,7 @@ import {
   facetCounts,
   isUnfiltered,
   toggleValue,
+  type FacetCounts,
   type MapFilter,
 } from './map-filters.js';
 import { POSTING_KEYS, type MapData, type MapPoint, type UnplacedSurvey } from './map-points.js';
@@ -42,6 +44,15 @@ import {
   type TileService,
 } from './tile-settings.js';
 import { UnplacedList } from './unplaced-list.js';
+
+/** A performance mark (the map benchmark reads them); never fails. */
+function mark(name: string): void {
+  try {
+    performance.mark(name);
+  } catch {
+    // Marks are diagnostics only.
+  }
+}
 
 type Panel = null | 'filters' | 'basemap' | 'files' | 'unplaced';
 
@@ -79,6 +90,8 @@ export function MapScreen() {
   const [viewError, setViewError] = useState(false);
   const [data, setData] = useState<MapData | null>(null);
   const [loadError, setLoadError] = useState<string | null>(null);
+  /** True while the surveys are being checked against a cached view. */
+  const [checking, setChecking] = useState(false);
   const [filter, setFilter] = useState<MapFilter>(NO_FILTER);
   const [panel, setPanel] = useState<Panel>(null);
   const [selected, setSelected] = useState<MapPoint | UnplacedSurvey | null>(null);
@@ -91,22 +104,25 @@ export function MapScreen() {
   const online = useOnline();
 
   const reload = useCallback(() => {
-    loadMapData()
-      .then((d) => {
-        setData(d);
-        setLoadError(null);
-      })
-      .catch((err: unknown) => {
-        setLoadError(
-          typeof err === 'object' && err !== null && 'userMessage' in err
-            ? String((err as { userMessage: unknown }).userMessage)
-            : t('map.loadFailed'),
-        );
-      });
+    setChecking(true);
+    loadMapData((d, phase) => {
+      mark('grainline:map-data');
+      setData(d);
+      setLoadError(null);
+      if (phase === 'checked') setChecking(false);
+    }).catch((err: unknown) => {
+      setLoadError(
+        typeof err === 'object' && err !== null && 'userMessage' in err
+          ? String((err as { userMessage: unknown }).userMessage)
+          : t('map.loadFailed'),
+      );
+      setChecking(false);
+    });
   }, []);
 
   // Data, settings and the Leaflet module load side by side.
   useEffect(() => {
+    mark('grainline:map-open');
     reload();
     const store = deviceStore();
     void Promise.all([
@@ -119,20 +135,36 @@ export function MapScreen() {
       setArchives(a);
     });
     let cancelled = false;
+    // The clustering worker starts now, so its code is loaded by the time the surveys are.
+    const clusters = new ClusterClient();
     import('./leaflet-view.js')
       .then(({ createMapView }) => {
-        if (cancelled || !mapEl.current) return;
-        view.current = createMapView(mapEl.current, {
-          onSelect: (p) => setSelected(p),
-          onTileStatus: setTileStatus,
-          onRendered: (n) => {
-            // For the benchmark and the browser tests: when the first markers were drawn.
-            if (n > 0 && mapEl.current) mapEl.current.dataset.rendered = String(performance.now());
+        if (cancelled || !mapEl.current) {
+          clusters.dispose();
+          return;
+        }
+        view.current = createMapView(
+          mapEl.current,
+          {
+            onSelect: (p) => setSelected(p),
+            onTileStatus: setTileStatus,
+            onRendered: (n) => {
+              // For the benchmark and the browser tests: when the first markers were drawn.
+              if (n > 0 && mapEl.current && !mapEl.current.dataset.rendered) {
+                mark('grainline:map-rendered');
+                mapEl.current.dataset.rendered = String(performance.now());
+              }
+            },
           },
-        });
+          clusters,
+        );
+        mark('grainline:map-view');
         setViewReady(true);
       })
-      .catch(() => setViewError(true));
+      .catch(() => {
+        clusters.dispose();
+        setViewError(true);
+      });
     return () => {
       cancelled = true;
       view.current?.destroy();
@@ -146,8 +178,18 @@ export function MapScreen() {
     [data, filter],
   );
   const allSummaries = useMemo(() => (data ? [...data.points, ...data.unplaced] : []), [data]);
-  const counts = useMemo(() => facetCounts(allSummaries, filter), [allSummaries, filter]);
-  const range = useMemo(() => dataRange(allSummaries), [allSummaries]);
+  // Counts and the date range are computed just after the markers are drawn (a pass over
+  // every survey each), so they never hold up the map's first drawing.
+  const [counts, setCounts] = useState<FacetCounts>(() => facetCounts([], NO_FILTER));
+  const [range, setRange] = useState<ReturnType<typeof dataRange>>(() => dataRange([]));
+  useEffect(() => {
+    const timer = setTimeout(() => setCounts(facetCounts(allSummaries, filter)), 0);
+    return () => clearTimeout(timer);
+  }, [allSummaries, filter]);
+  useEffect(() => {
+    const timer = setTimeout(() => setRange(dataRange(allSummaries)), 0);
+    return () => clearTimeout(timer);
+  }, [allSummaries]);
 
   useEffect(() => {
     if (!viewReady || !data || !view.current) return;
@@ -264,9 +306,11 @@ export function MapScreen() {
           <h1>{t('nav.map')}</h1>
           <p class="gl-map-head__status" role="status" data-testid="map-status">
             {data
-              ? isUnfiltered(filter)
-                ? t('map.status.all', { total })
-                : t('map.status.some', { shown, total })
+              ? `${
+                  isUnfiltered(filter)
+                    ? t('map.status.all', { total })
+                    : t('map.status.some', { shown, total })
+                }${checking ? ` · ${t('map.status.checking')}` : ''}`
               : (loadError ?? t('loading'))}
           </p>
         </div>

@@ -89,6 +89,7 @@ export const map = {
   'map.viewFailed': 'The map could not be started. The surveys are safe; reload to try again.',
   'map.status.all': 'Surveys: {total}',
   'map.status.some': 'Showing {shown} of {total} surveys',
+  'map.status.checking': 'checking for changes…',
   'map.empty':
     'No surveys on this device yet. Import the files of your inspectors to see them here.',
   'map.empty.import': 'Import files',
