@@ -101,6 +101,12 @@ describe('a survey from arrival to verdict, at phone size, offline', () => {
     surveyUrl = page.url().replace(/\/place$/, '');
     expect(surveyUrl).toMatch(/\/survey\/[0-9a-f-]{36}$/);
     await address.fill('7 Quarry Row, Upper Fennick');
+    // A GPS fix shows its accuracy; typed coordinates then replace it.
+    await context?.grantPermissions(['geolocation']);
+    await context?.setGeolocation({ latitude: 46.20395, longitude: 7.36011, accuracy: 12 });
+    await page.getByRole('button', { name: 'Use GPS position' }).click();
+    await page.getByText('GPS, accurate to about ±12 m').waitFor();
+    await shoot(page, '02-place-gps');
     await page.getByLabel('Latitude').fill('46.2041');
     await page.getByLabel('Longitude').fill('7,3602');
     await page.getByText('Read as 7.3602').waitFor();

@@ -40,6 +40,10 @@ describe('step issues', () => {
       'Choose the hazard: the response spectrum to screen against.',
     ]);
     expect(readyToScreen(issues)).toBe(false);
+    // No storeys: the walls step is not done either.
+    expect(issues.walls.map((i) => i.message)).toEqual([
+      'Add the storeys first, in the Building step.',
+    ]);
   });
   it('maps record paths to steps and unknown step names to the first step', () => {
     expect(stepOfPath('observations.uplift.0.gapM')).toBe('observations');

@@ -78,8 +78,7 @@ export const screens = {
   'place.gps.unsupported': 'This browser gives no position. Type the coordinates.',
   'place.gps.poor':
     'The GPS position is rough (more than 50 m). Check it, or type the coordinates.',
-  'place.mapHint':
-    'Or type the coordinates in decimal degrees (WGS84), or tap the building on the map.',
+  'place.mapHint': 'Or type the coordinates in decimal degrees (WGS84).',
   'place.people': 'Inspection',
   'place.visit.first': 'First visit',
   'place.visit.again': 'Re-inspection',

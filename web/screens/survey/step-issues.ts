@@ -128,6 +128,15 @@ export function stepIssues(record: SurveyRecord, system: UnitSystem): StepIssues
       });
     }
   }
+  // Without storeys there is nowhere to put walls: the walls step is not done either.
+  if (record.building.storeys.length === 0) {
+    out.walls.push({
+      kind: 'gap',
+      path: 'walls',
+      target: 'section-walls',
+      message: t('walls.needStoreys'),
+    });
+  }
   for (const s of STEPS)
     out[s].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === 'error' ? -1 : 1));
   return out;
