@@ -3,9 +3,10 @@
  * recommended posting, the damage state and whether the building needs a detailed
  * assessment.
  *
- * The result snapshot is JSON whose shape is owned by calc/screening (`screen()` lands with
- * its own issue). Until then this reader is tolerant: it looks for the documented fields
- * below and treats anything it cannot read as "not screened" rather than guessing.
+ * The result snapshot is calc/screening's ScreeningResult stored as JSON
+ * (test/unit/exchange-verdict.test.ts checks this reader against real `screen()` results).
+ * A stored snapshot may come from any build or file, so the reader is tolerant: it looks
+ * for the fields below and treats anything it cannot read as "not screened", never guessing.
  * - posting: `result.posting` (a posting id) or `result.posting.level`;
  * - damage state: `result.damageState` (a damage-state id) or `result.damage.state`;
  * - needs assessment: `result.needsAssessment` (boolean) or `result.detailedAssessment`.
