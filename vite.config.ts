@@ -55,7 +55,7 @@ export default defineConfig({
       injectRegister: false,
       manifest: false,
       injectManifest: {
-        globPatterns: ['**/*.{html,js,css,svg,png,webmanifest,woff2}'],
+        globPatterns: ['**/*.{html,js,css,svg,png,webmanifest,woff2,geojson}'],
         // Leaflet and the offline-map reader are large; precache them all the same, so
         // the map opens offline after one visit.
         maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
