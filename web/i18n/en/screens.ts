@@ -25,6 +25,7 @@ export const screens = {
   'home.untitled': 'Building without address',
   'home.updated': 'Changed {when}',
   'home.storeys': '{count} storeys',
+  'home.storeyOne': '1 storey',
   'home.exchangeSlot': 'Import and export',
   'home.loadFailed': 'The list could not be read from this device: {reason}',
   'home.quarantined': 'Some stored records could not be read; they are kept apart.',

@@ -61,7 +61,11 @@ export function BuildingItem({ record, now }: { record: SurveyRecord; now: Date 
         <span class="building__detail">
           {t('home.updated', { when: when(record.updatedAt, now) })}
           {record.building.storeys.length > 0 &&
-            ` · ${t('home.storeys', { count: record.building.storeys.length })}`}
+            ` · ${
+              record.building.storeys.length === 1
+                ? t('home.storeyOne')
+                : t('home.storeys', { count: record.building.storeys.length })
+            }`}
           {record.inspector && ` · ${record.inspector}`}
         </span>
       </a>
