@@ -8,7 +8,7 @@ import { HomeScreen } from '../screens/home/home-screen.js';
 import { NavBar } from './nav-bar.js';
 import { NotFoundScreen } from './not-found-screen.js';
 import { UpdateNotice } from './update-notice.js';
-import { StorageNotices } from '../storage/storage-notices.js';
+import { DeferredStorageNotices } from './deferred-storage-notices.js';
 
 // Route table. Each screen module is owned by its area; the shell only maps paths to them.
 const SettingsScreen = lazy(() =>
@@ -23,7 +23,7 @@ export function App() {
   return (
     <LocationProvider>
       <div class="app">
-        <StorageNotices />
+        <DeferredStorageNotices />
         <ErrorBoundary>
           <Router>
             <Route path="/" component={HomeScreen} />

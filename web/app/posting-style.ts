@@ -41,7 +41,7 @@ export const postingStyles: Record<PostingLevel, LevelStyle> = {
   },
   'keep-out': {
     label: 'posting.keepOut',
-    symbol: '⬛',
+    symbol: '■',
     fill: '#1a1a1a',
     border: '#000000',
     ink: '#ffffff',

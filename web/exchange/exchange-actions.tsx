@@ -4,6 +4,7 @@
  * zip with photos, shared through the system share sheet where the browser can, downloaded
  * otherwise. Every export carries the cautions; the caution is also shown here.
  */
+import '../styles/map.css';
 import { useRef, useState } from 'preact/hooks';
 import type { SurveyRecord } from '../../forms/index.js';
 import { t } from '../i18n/index.js';

@@ -5,12 +5,11 @@
  */
 import { t } from '../../i18n/index.js';
 
-/** Where a build that bundles the demo town serves it. */
-export const DEMO_TOWN_URL = '/demo-town.geojson';
-
 export async function loadDemoTown(): Promise<string> {
   let text: string;
   try {
+    // The demo file is a build asset (web/demo), precached by the service worker.
+    const { DEMO_TOWN_URL } = await import('../../demo/index.js');
     const response = await fetch(DEMO_TOWN_URL);
     const type = response.headers.get('content-type') ?? '';
     // An unknown path is answered with the app's HTML page: that is "not bundled".
