@@ -78,6 +78,16 @@ describe('residual drift from a tilt', () => {
       ratioOf({ method: 'tilt', tiltRad: -tilt, offsetM: null, overHeightM: null }),
     ).toBeCloseTo(Math.tan(tilt), 15);
   });
+  it('reads a phone tilt-meter reading by its tilt, like a typed tilt', () => {
+    // tan(0.4°) = 0.0069814 (trigonometry).
+    const tiltRad = (0.4 * Math.PI) / 180;
+    expect(
+      ratioOf({ method: 'phone-tilt', tiltRad, offsetM: null, overHeightM: null }),
+    ).toBeCloseTo(0.0069814, 7);
+    expect(ratioOf({ method: 'phone-tilt', tiltRad: null, offsetM: null, overHeightM: null })).toBe(
+      null,
+    );
+  });
   it('keeps both readings and switches which one is used', () => {
     let r = ok(setDriftField(base(), 0, 'x', 'offsetM', 0.014));
     r = ok(setDriftField(r, 0, 'x', 'tiltRad', (0.5 * Math.PI) / 180));

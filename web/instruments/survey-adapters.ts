@@ -4,7 +4,7 @@
  * and direction (method 'phone-tilt', with its uncertainty) and stores its raw readings; the
  * vibration recorder sets the measured frequency and stores the recording.
  */
-import { empiricalPeriod } from '../../calc/index.js';
+import { buildingResponse, empiricalPeriod } from '../../calc/index.js';
 import type { Direction, MeasuredFrequencyInput } from '../../calc/index.js';
 import { clearUnparsed, limits, type SurveyRecord } from '../../forms/index.js';
 import type { InstrumentEntry } from '../../forms/instruments/index.js';
@@ -75,10 +75,22 @@ export function withVibration(
 }
 
 /**
- * The period the recorder compares with when nothing better is known: EN 1998-1 eq. (4.6)
- * on the total storey height (calc/period), s; null without storey heights.
+ * The period the recorder compares with: the storey model's first modal period (the longer
+ * of the two directions) when walls are entered, else EN 1998-1 eq. (4.6) on the total
+ * storey height; s; null without storey heights. A measured frequency already on the record
+ * is left out, so a new recording is compared with the model, not with itself.
  */
 export function expectedPeriodFor(record: SurveyRecord): number | null {
   const h = record.building.storeys.reduce((s, st) => s + (st.heightM ?? 0), 0);
-  return h > 0 ? empiricalPeriod(h, 'ec8') : null;
+  if (!(h > 0)) return null;
+  try {
+    const response = buildingResponse({ ...record, measured: null });
+    const modal = [response.x.period.modalS, response.y.period.modalS].filter(
+      (v): v is number => v !== null && Number.isFinite(v) && v > 0,
+    );
+    if (modal.length > 0) return Math.max(...modal);
+  } catch {
+    // An incomplete draft: fall back to the code formula below.
+  }
+  return empiricalPeriod(h, 'ec8');
 }

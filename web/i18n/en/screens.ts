@@ -212,6 +212,7 @@ export const screens = {
   'obs.useTilt': 'the tilt',
   'obs.driftFromOffset': 'Residual drift {percent} % (from the offset)',
   'obs.driftFromTilt': 'Residual drift {percent} % (from the tilt)',
+  'obs.driftFromPhone': 'Residual drift {percent} % ± {uncertainty} % (phone tilt meter)',
   'obs.driftTooLarge':
     'That would be a drift of {percent} %, which is not plausible. Check the offset, the height and the units.',
   'obs.removeDrift': 'Remove reading',

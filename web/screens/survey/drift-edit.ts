@@ -51,7 +51,10 @@ export function ratioOf(
   if (r.method === 'offset' && r.offsetM !== null && r.overHeightM !== null && r.overHeightM > 0) {
     return Math.abs(r.offsetM) / r.overHeightM;
   }
-  if (r.method === 'tilt' && r.tiltRad !== null) return Math.tan(Math.abs(r.tiltRad));
+  // A phone-tilt reading stores its tilt (after the reversal) like a typed one.
+  if ((r.method === 'tilt' || r.method === 'phone-tilt') && r.tiltRad !== null) {
+    return Math.tan(Math.abs(r.tiltRad));
+  }
   return null;
 }
 

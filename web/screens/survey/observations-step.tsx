@@ -203,9 +203,14 @@ function DriftReading(props: StepProps & { storey: number; direction: 'x' | 'y' 
       {reading && (
         <div class="drift-card__result">
           <p class="reading" aria-live="polite">
-            {t(reading.method === 'tilt' ? 'obs.driftFromTilt' : 'obs.driftFromOffset', {
-              percent: formatNumber(reading.ratio * 100, 'pct'),
-            })}
+            {reading.method === 'phone-tilt'
+              ? t('obs.driftFromPhone', {
+                  percent: formatNumber(reading.ratio * 100, 'pct'),
+                  uncertainty: formatNumber((reading.uncertainty ?? 0) * 100, 'pct'),
+                })
+              : t(reading.method === 'tilt' ? 'obs.driftFromTilt' : 'obs.driftFromOffset', {
+                  percent: formatNumber(reading.ratio * 100, 'pct'),
+                })}
           </p>
           <button
             type="button"
