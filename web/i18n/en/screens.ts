@@ -8,6 +8,7 @@ export const screens = {
   'home.demoUnavailable':
     'The demo town is not available in this build. Your own surveys are not affected.',
   'home.demoLoading': 'Loading the demo town…',
+  'home.showMore': 'Show {count} more ({left} not shown)',
   'home.demoLoaded': 'Demo town loaded: {count} buildings.',
   'home.demoFailed': 'The demo town could not be loaded: {reason}',
   'home.creating': 'Starting a new survey…',

@@ -19,6 +19,12 @@ import type { ExchangeActionsProps } from '../../exchange/exchange-actions.js';
 // screen is usable at once (a lazy() component would hold the whole route back instead).
 const data = () => import('./home-data.js');
 
+/**
+ * Buildings drawn at a time. A team lead's merged device can hold thousands of surveys;
+ * drawing them all makes the list (and leaving it) slow on a phone, so it grows on request.
+ */
+const PAGE = 50;
+
 const filterLabels: Record<ListFilter, MessageKey> = {
   all: 'home.filter.all',
   open: 'posting.open',
@@ -36,6 +42,9 @@ export function HomeScreen() {
   const [loadError, setLoadError] = useState<string | null>(null);
   const [query, setQuery] = useState('');
   const [filter, setFilter] = useState<ListFilter>('all');
+  const [limit, setLimit] = useState(PAGE);
+  // A new search or filter starts again from the first page.
+  useEffect(() => setLimit(PAGE), [query, filter]);
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
 
   const [Exchange, setExchange] = useState<ComponentType<ExchangeActionsProps> | null>(null);
@@ -146,10 +155,20 @@ export function HomeScreen() {
         <p class="muted">{t('home.noMatch')}</p>
       )}
       <ul class="building-list">
-        {shown.map((r) => (
+        {shown.slice(0, limit).map((r) => (
           <BuildingItem key={r.id} record={r} now={now} />
         ))}
       </ul>
+      {shown.length > limit && (
+        <p>
+          <button type="button" class="button button--wide" onClick={() => setLimit(limit + PAGE)}>
+            {t('home.showMore', {
+              count: Math.min(PAGE, shown.length - limit),
+              left: shown.length - limit,
+            })}
+          </button>
+        </p>
+      )}
 
       <section class="card home__exchange" aria-labelledby="exchange-title">
         <h2 id="exchange-title">{t('home.exchangeSlot')}</h2>
