@@ -10,6 +10,7 @@ const benches = [
   'buildings.bench.ts',
   'rocking.bench.ts',
   'storage.bench.ts',
+  'storage-browser.bench.ts',
   'exchange.bench.ts',
   'map.bench.ts',
   'cli.bench.ts',

@@ -18,10 +18,9 @@
  *
  * Runs in Node on fake-indexeddb (an in-memory JavaScript implementation), so absolute
  * figures say little about a phone; the ratios show the wrapper's own cost (validation,
- * row building, parsing). The browser figures — the same bulk numbers on Chromium's
- * IndexedDB, and the keystroke-to-durable-save latency p50/p95 under 4× CPU throttling
- * (Emulation.setCPUThrottlingRate) — need a page with the survey form and are measured by
- * the browser benchmark of phase two.
+ * row building, parsing). The browser figures (the same bulk numbers on Chromium's
+ * IndexedDB, and the keystroke-to-durable-save latency p50/p95 under 4× CPU throttling)
+ * come from test/bench/storage-browser.bench.ts.
  *
  * A benchmark, not a test: it prints figures and never fails on speed.
  */
@@ -29,104 +28,19 @@ import { spawnSync } from 'node:child_process';
 import { getHeapStatistics } from 'node:v8';
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
-import { emptySurvey, type SurveyRecord } from '../../forms/index.js';
+import type { SurveyRecord } from '../../forms/index.js';
 import { SurveyStore } from '../../web/storage/index.js';
 import { cellOf, outcomeOf } from '../../web/storage/derived.js';
 import { mulberry32 } from './prng.js';
+import { sampleSurveys } from './survey-sample.js';
 
 const COUNT = Number(process.env.BENCH_COUNT ?? 100_000);
 const SEED = 20_250_611;
 const GOAL = 1.5;
 
-const rand = mulberry32(SEED);
-const between = (lo: number, hi: number) => lo + (hi - lo) * rand();
-const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)] as T;
-
-function uuidFromRand(): string {
-  const hex = Array.from({ length: 32 }, () => Math.floor(rand() * 16).toString(16));
-  hex[12] = '4';
-  hex[16] = pick(['8', '9', 'a', 'b']);
-  const h = hex.join('');
-  return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
-}
-
-/** A plausible two- or three-storey survey, about 3 kB as JSON. */
-function makeSurvey(i: number): SurveyRecord {
-  const t = new Date(Date.UTC(2025, 5, 1) + i * 60_000);
-  const base = emptySurvey('bench-device', t, uuidFromRand());
-  const storeys = 2 + Math.floor(rand() * 2);
-  return {
-    ...base,
-    revision: 1 + Math.floor(rand() * 20),
-    address: `${1 + Math.floor(rand() * 200)} Bench Street, block ${i}`,
-    location: {
-      lat: between(44, 46),
-      lon: between(6, 9),
-      accuracyM: between(3, 20),
-      source: 'gps',
-    },
-    inspector: 'Bench Inspector',
-    team: `Team ${i % 17}`,
-    building: {
-      ...base.building,
-      system: pick(['light-frame', 'mass-timber-panel'] as const),
-      planXM: between(8, 30),
-      planYM: between(6, 20),
-      storeys: Array.from({ length: storeys }, (_, s) => ({
-        heightM: between(2.5, 3.2),
-        floorAreaM2: between(60, 400),
-        floorConstruction: s === 0 ? 'on-grade' : pick(['light-timber', 'clt'] as const),
-        unitWeightPa: null,
-      })),
-    },
-    walls: Array.from({ length: storeys * 2 }, (_, w) => ({
-      id: `w${w}`,
-      storey: Math.floor(w / 2),
-      direction: w % 2 === 0 ? 'x' : 'y',
-      type: pick(['wsp-100', 'wsp-75', 'gypsum', 'clt-bracketed'] as const),
-      lengthM: between(2, 12),
-      heightM: null,
-      positionM: between(0, 20),
-      connectors: null,
-      rocking: null,
-      devices: [],
-      userUnitShearNPerM: null,
-      userUnitStiffnessNPerM2: null,
-    })),
-    observations: {
-      uplift: [],
-      residualDrift: [
-        {
-          storey: 0,
-          direction: 'x',
-          ratio: between(0, 0.02),
-          method: 'phone-tilt',
-          offsetM: null,
-          overHeightM: null,
-          tiltRad: between(-0.02, 0.02),
-          uncertainty: 0.001,
-        },
-      ],
-      checklist: [{ item: 'falling-hazard', severity: 'minor' }],
-      notes: 'Cracked plaster at the stair; chimney intact.',
-    },
-    hazard: {
-      kind: 'ec8',
-      type: 1,
-      ground: pick(['A', 'B', 'C'] as const),
-      ag: between(0.1, 0.35),
-    },
-    result:
-      rand() < 0.7
-        ? {
-            calcVersion: '0.1.0',
-            computedAt: t.toISOString(),
-            result: { posting: pick(['open', 'limited', 'keep-out']), periodS: between(0.1, 0.5) },
-          }
-        : null,
-    unconfirmed: [],
-  };
-}
+const makeSurvey = sampleSurveys(SEED);
+/** Picks the ids for the get-by-id round (its own stream, so the records do not change). */
+const rand = mulberry32(SEED + 1);
 
 function gc(): void {
   (globalThis as { gc?: () => void }).gc?.();
@@ -337,8 +251,8 @@ async function main(): Promise<void> {
       `so the storage layer's own share is ${ratio(ourById.ms, idbById.ms)}× of idb's`,
   );
   console.log(
-    '\nNode with fake-indexeddb, not a browser. Keystroke-to-durable-save latency (p50/p95 under\n' +
-      '4× CPU throttling) and the browser bulk figures need Chromium: phase two.',
+    '\nNode with fake-indexeddb, not a browser. The browser figures (bulk on Chromium, keystroke\n' +
+      'to durable save under 4× CPU throttling): npx tsx test/bench/storage-browser.bench.ts',
   );
   store.close();
   bareDb.close();

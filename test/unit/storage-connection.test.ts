@@ -143,8 +143,11 @@ describe('database upgrades', () => {
       saveState: 'error',
       error: { kind: 'reload-required' },
     });
-    // The new tab was blocked while the old one flushed, and was told so.
-    expect(newSeen.map((n) => n.type)).toContain('upgrade-blocked');
+    // The new tab was blocked while the old one flushed, was told so, and then that the
+    // wait was over (so the app shell takes the notice down again).
+    const types = newSeen.map((n) => n.type);
+    expect(types).toContain('upgrade-blocked');
+    expect(types.indexOf('upgrade-unblocked')).toBeGreaterThan(types.indexOf('upgrade-blocked'));
   });
 
   it('a tab of an older build refuses a database a newer build already upgraded', async () => {

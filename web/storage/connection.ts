@@ -21,9 +21,13 @@ import { isAbortError, isConnectionLost, StorageError } from './errors.js';
 /** What the storage layer tells the app shell. */
 export type StoreNotice =
   | { type: 'upgrade-blocked'; message: string }
+  /** The open that was blocked went through (the older tab closed). */
+  | { type: 'upgrade-unblocked' }
   | { type: 'reload-required'; message: string }
   | { type: 'reopened' }
-  | { type: 'quarantined'; count: number; message: string };
+  | { type: 'quarantined'; count: number; message: string }
+  /** The answer to `navigator.storage.persist()`, asked after this tab's first save. */
+  | { type: 'persistence'; granted: boolean | null };
 
 export interface ConnectionOptions {
   factory: IDBFactory;
@@ -68,12 +72,15 @@ export class Connection {
     }
     if (this.disposed) throw new Error('storage connection used after close()');
     if (this.opening === null) {
+      let wasBlocked = false;
       const opening = openDatabase(this.options.factory, this.options.name, this.options.version, {
-        blocked: () =>
+        blocked: () => {
+          wasBlocked = true;
           this.options.notify({
             type: 'upgrade-blocked',
             message: this.catalogue.storage.upgradeBlocked,
-          }),
+          });
+        },
         blocking: (db) => void this.handleVersionChange(db),
         terminated: () => {
           this.losses++;
@@ -84,6 +91,7 @@ export class Connection {
       opening.then(
         (db) => {
           if (this.opening === opening) this.current = db;
+          if (wasBlocked) this.options.notify({ type: 'upgrade-unblocked' });
         },
         () => this.forget(opening),
       );

@@ -151,6 +151,7 @@ export class SurveyStore {
   private readonly noticeListeners = new Set<(n: StoreNotice) => void>();
   private readonly flushers = new Set<() => Promise<void>>();
   private deviceIdCache: string | null = null;
+  private persistenceAsked = false;
 
   constructor(options: SurveyStoreOptions = {}) {
     const factory = options.indexedDB ?? globalThis.indexedDB;
@@ -315,7 +316,7 @@ export class SurveyStore {
         tabId: this.tabId,
         revision: stored.revision,
       });
-      void this.persistence.requestOnce();
+      this.askPersistenceOnce();
     }
     return outcome;
   }
@@ -399,6 +400,7 @@ export class SurveyStore {
         return { revisionsWritten: valid.length, currentUpdated: updated };
       }),
     );
+    if (result.revisionsWritten > 0) this.askPersistenceOnce();
     if (result.currentUpdated.length > 0) {
       this.postTabMessage({
         type: 'changed',
@@ -468,6 +470,11 @@ export class SurveyStore {
 
   async countQuarantined(): Promise<number> {
     return this.read((db) => db.count('quarantine'));
+  }
+
+  /** How many current surveys are stored (readable or not yet checked). */
+  async countSurveys(): Promise<number> {
+    return this.read((db) => db.count('surveys'));
   }
 
   /**
@@ -631,6 +638,15 @@ export class SurveyStore {
   }
 
   // ——— internals ———
+
+  /** After the first save: ask the browser to keep the data, and tell the shell its answer. */
+  private askPersistenceOnce(): void {
+    if (this.persistenceAsked) return;
+    this.persistenceAsked = true;
+    void this.persistence
+      .requestOnce()
+      .then((granted) => this.notify({ type: 'persistence', granted }));
+  }
 
   private notify(n: StoreNotice): void {
     for (const listener of [...this.noticeListeners]) listener(n);
