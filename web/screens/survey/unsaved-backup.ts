@@ -1,6 +1,6 @@
 /**
  * A safety net for the last quarter second. The draft saver writes each change to IndexedDB
- * within 250 ms and flushes on `pagehide`, but a transaction started while the page unloads
+ * within 200 ms and flushes on `pagehide`, but a transaction started while the page unloads
  * (a reload, a pull-to-refresh) may never complete. So when the page goes away with a change
  * not yet saved, the record as shown is also put in localStorage, synchronously; when the
  * survey opens again and IndexedDB still holds the revision that change was based on, the
