@@ -28,7 +28,7 @@ Options
   --color      colour the posting in the table; --no-color: never. By default the table
                is coloured when it goes to a terminal and NO_COLOR is not set. The
                posting always reads without colour: symbol and word (○ Open, ◐ Limited
-               entry, ⬛ Keep out).
+               entry, ■ Keep out).
 
 Table columns
   #                 index of the item in its file (from 0)

@@ -133,7 +133,10 @@ export class JsonArrayScanner {
             break;
           }
           if (b === COMMA || b === CLOSE_ARRAY || b === COLON || b === CLOSE_OBJECT) {
-            return this.fail(out, `the list is broken before item ${this.index}: unexpected "${String.fromCharCode(b)}"`);
+            return this.fail(
+              out,
+              `the list is broken before item ${this.index}: unexpected "${String.fromCharCode(b)}"`,
+            );
           }
           this.begin('element', i);
           continue; // the value scanner reads this byte
@@ -144,7 +147,10 @@ export class JsonArrayScanner {
             this.phase = 'array-value';
           } else if (b === CLOSE_ARRAY) this.closeArray();
           else {
-            return this.fail(out, `the list is broken after item ${this.index - 1}: expected "," or "]"`);
+            return this.fail(
+              out,
+              `the list is broken after item ${this.index - 1}: expected "," or "]"`,
+            );
           }
           break;
         case 'object-key':
@@ -163,7 +169,8 @@ export class JsonArrayScanner {
           break;
         case 'object-colon':
           if (isSpace(b)) break;
-          if (b !== COLON) return this.fail(out, `the top-level object is broken after "${this.key}"`);
+          if (b !== COLON)
+            return this.fail(out, `the top-level object is broken after "${this.key}"`);
           this.phase = 'object-value';
           break;
         case 'object-value':
@@ -184,7 +191,8 @@ export class JsonArrayScanner {
           } else return this.fail(out, `the top-level object is broken after "${this.key}"`);
           break;
         case 'done':
-          if (!isSpace(b)) return this.fail(out, 'there is more text after the end of the JSON document');
+          if (!isSpace(b))
+            return this.fail(out, 'there is more text after the end of the JSON document');
           break;
         default:
           break;
@@ -202,7 +210,11 @@ export class JsonArrayScanner {
     if (!this.sawFirstByte) return this.fail(out, 'the file is empty');
     if (this.phase !== 'done') {
       if (this.capturing === 'element') {
-        out.push({ kind: 'element-error', index: this.index, reason: `the file ends inside item ${this.index}` });
+        out.push({
+          kind: 'element-error',
+          index: this.index,
+          reason: `the file ends inside item ${this.index}`,
+        });
       }
       return this.fail(out, 'the file ends before the JSON document is closed (cut short?)');
     }
@@ -276,7 +288,8 @@ export class JsonArrayScanner {
 
   private keep(chunk: Buffer, from: number, to: number): void {
     if (to <= from) return;
-    const limit = this.capturing === 'element' ? this.options.maxElementBytes : this.options.maxMemberBytes;
+    const limit =
+      this.capturing === 'element' ? this.options.maxElementBytes : this.options.maxMemberBytes;
     this.size += to - from;
     if (this.size > limit) {
       this.oversized = true;
@@ -343,7 +356,11 @@ export class JsonArrayScanner {
           reason: `item ${this.index} is larger than ${Math.round(this.options.maxElementBytes / 1048576)} MB; skipped`,
         });
       } else if (this.mismatched) {
-        out.push({ kind: 'element-error', index: this.index, reason: `item ${this.index} is not valid JSON (its brackets do not match)` });
+        out.push({
+          kind: 'element-error',
+          index: this.index,
+          reason: `item ${this.index} is not valid JSON (its brackets do not match)`,
+        });
       } else out.push({ kind: 'element', index: this.index, text });
       this.index++;
       this.phase = 'array-after';
@@ -368,7 +385,8 @@ export async function* scanJsonArray(
     const events = scanner.push(typeof chunk === 'string' ? Buffer.from(chunk, 'utf8') : chunk);
     for (const e of events) {
       yield e;
-      if (e.kind === 'fatal') return { topLevelArray: scanner.topLevelArray, sawFeatures: scanner.sawFeatures };
+      if (e.kind === 'fatal')
+        return { topLevelArray: scanner.topLevelArray, sawFeatures: scanner.sawFeatures };
     }
   }
   for (const e of scanner.end()) yield e;

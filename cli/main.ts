@@ -41,7 +41,9 @@ export async function runCli(args: readonly string[], io: CliIo): Promise<number
     } else files.push(a);
   }
   if (files.length === 0) {
-    await io.err('grainline screen: name at least one file (or "-" for standard input). Try: grainline --help\n');
+    await io.err(
+      'grainline screen: name at least one file (or "-" for standard input). Try: grainline --help\n',
+    );
     return 2;
   }
   const useColour = colour ?? (io.stdoutIsTerminal && io.env['NO_COLOR'] === undefined);

@@ -68,7 +68,11 @@ class Output {
     return this.options.files.length > 1 ? `${file}:${index}` : String(index);
   }
 
-  async screened(file: string, item: Extract<ReadItem, { ok: true }>, result: ScreeningResult): Promise<void> {
+  async screened(
+    file: string,
+    item: Extract<ReadItem, { ok: true }>,
+    result: ScreeningResult,
+  ): Promise<void> {
     if (this.options.json) {
       const entry = {
         file,
@@ -84,18 +88,30 @@ class Output {
       return;
     }
     const name = item.address ?? item.id ?? `${file} item ${item.index}`;
-    await this.io.out(resultRow(this.label(file, item.index), name, result, this.options.colour) + '\n');
+    await this.io.out(
+      resultRow(this.label(file, item.index), name, result, this.options.colour) + '\n',
+    );
   }
 
-  async failed(file: string, index: number, id: string | null, address: string | null, reasons: string[]): Promise<void> {
-    await this.io.err(`${file}: item ${index}${address ? ` (${address})` : id ? ` (${id})` : ''}: ${reasons.join('; ')}\n`);
+  async failed(
+    file: string,
+    index: number,
+    id: string | null,
+    address: string | null,
+    reasons: string[],
+  ): Promise<void> {
+    await this.io.err(
+      `${file}: item ${index}${address ? ` (${address})` : id ? ` (${id})` : ''}: ${reasons.join('; ')}\n`,
+    );
     if (this.options.json) {
       const entry = { file, index, ok: false, id, address, reasons };
       await this.io.out((this.first ? '' : ',\n') + JSON.stringify(entry));
       this.first = false;
       return;
     }
-    await this.io.out(failedRow(this.label(file, index), address ?? id ?? `${file} item ${index}`) + '\n');
+    await this.io.out(
+      failedRow(this.label(file, index), address ?? id ?? `${file} item ${index}`) + '\n',
+    );
   }
 }
 
@@ -118,7 +134,9 @@ async function screenItem(
     result = screen(item.survey, { rockingTimeHistory: !options.quick });
   } catch (e) {
     counts.failed++;
-    await output.failed(file, index, item.id, item.address, [`the calculation stopped: ${(e as Error).message}`]);
+    await output.failed(file, index, item.id, item.address, [
+      `the calculation stopped: ${(e as Error).message}`,
+    ]);
     return;
   }
   counts.screened++;
@@ -141,7 +159,10 @@ async function screenFile(
     return;
   }
   const members = new Map<string, unknown>();
-  const events = scanJsonArray(chunks, { maxElementBytes: MAX_ITEM_BYTES, maxMemberBytes: MAX_ITEM_BYTES });
+  const events = scanJsonArray(chunks, {
+    maxElementBytes: MAX_ITEM_BYTES,
+    maxMemberBytes: MAX_ITEM_BYTES,
+  });
   let shape = { topLevelArray: false, sawFeatures: false };
   try {
     for (;;) {
@@ -215,7 +236,8 @@ export async function screenCommand(options: ScreenCommandOptions, io: CliIo): P
   for (const file of options.files) await screenFile(file, io, options, output, counts);
   await output.end();
   const parts = [`${counts.screened} screened`, `${counts.failed} failed`];
-  if (counts.fileErrors > 0) parts.push(`${counts.fileErrors} file error${counts.fileErrors === 1 ? '' : 's'}`);
+  if (counts.fileErrors > 0)
+    parts.push(`${counts.fileErrors} file error${counts.fileErrors === 1 ? '' : 's'}`);
   await io.err(`${parts.join(', ')}.\n`);
   if (counts.fileErrors > 0) return 2;
   return counts.failed > 0 ? 1 : 0;

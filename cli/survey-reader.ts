@@ -105,7 +105,13 @@ export function readSurveyItem(value: unknown, index: number): ReadItem {
       parsed.reason === 'newer-version'
         ? [`the record was written by a newer version (schema ${parsed.version ?? '?'})`]
         : describe(parsed.messages);
-    return { ok: false, index, id: text(own(value, 'id'), 100), address: text(own(value, 'address')), reasons };
+    return {
+      ok: false,
+      index,
+      id: text(own(value, 'id'), 100),
+      address: text(own(value, 'address')),
+      reasons,
+    };
   }
   if (own(value, 'building') !== undefined) {
     const parsed = surveyInputSchema.safeParse(value);

@@ -25,14 +25,20 @@ export const COLUMNS: readonly Column[] = [
 
 /** Cuts or pads `text` to `width` characters (code points), marking a cut with "…". */
 export function fit(text: string, width: number, align: 'left' | 'right' = 'left'): string {
-  const chars = [...text.replace(/[\u0000-\u001f\u007f-\u009f]/g, ' ')];
+  // Control characters (from imported text) would break the layout or drive the terminal.
+  const chars = [...text].map((c) => {
+    const code = c.codePointAt(0) ?? 0;
+    return code < 0x20 || (code >= 0x7f && code < 0xa0) ? ' ' : c;
+  });
   const cut = chars.length > width ? [...chars.slice(0, width - 1), '…'] : chars;
   const pad = ' '.repeat(width - cut.length);
   return align === 'left' ? cut.join('') + pad : pad + cut.join('');
 }
 
 function row(cells: readonly string[]): string {
-  return COLUMNS.map((c, i) => fit(cells[i] ?? '', c.width, c.align)).join('  ').trimEnd();
+  return COLUMNS.map((c, i) => fit(cells[i] ?? '', c.width, c.align))
+    .join('  ')
+    .trimEnd();
 }
 
 export function headerLines(): string[] {

@@ -59,6 +59,11 @@ export const TORSION_ECCENTRICITY_LIMIT = 0.2;
 
 const NAMES = DAMAGE_STATE_WORDS;
 
+/** "Hazus W1, high code" / "Hazus W1, pre-code". */
+export function hazusClassText(cls: HazusWoodClass): string {
+  return `Hazus ${cls.type}, ${cls.level === 'pre-code' ? 'pre-code' : `${cls.level} code`}`;
+}
+
 function thresholdWords(
   medians: PerState,
   state: DamageState,
@@ -100,7 +105,7 @@ export function fragilityEvidence(
   addedBeta: number,
 ): PredictedFragility {
   const items: EvidenceItem[] = [];
-  const klass = `Hazus ${cls.type}, ${cls.level} code`;
+  const klass = hazusClassText(cls);
   const betas = widen(params.betas, addedBeta);
   let drift: FragilityReading | null = null;
   let spectral: FragilityReading | null = null;
@@ -258,7 +263,7 @@ export function softWeakEvidence(
   cls: HazusWoodClass,
 ): EvidenceItem[] {
   const out: EvidenceItem[] = [];
-  const klass = `Hazus ${cls.type}, ${cls.level} code`;
+  const klass = hazusClassText(cls);
   for (const d of dirs) {
     for (const f of d.flaggedStoreys) {
       if (d.zeroStrengthStoreys.includes(f.storey)) continue; // reported as no racking strength
@@ -311,7 +316,7 @@ export function softWeakEvidence(
         postingFloor: null,
         flag: flagged ? 'soft-or-weak-storey' : null,
         text:
-          `${capital(storeyName(f.storey))} along ${d.direction} is a ${kinds.join(' and ')} storey (${ratios.join(', ')})` +
+          `${capital(storeyName(f.storey))} along ${d.direction} is ${/^[aeiou]/.test(kinds[0] ?? '') ? 'an' : 'a'} ${kinds.join(' and ')} storey (${ratios.join(', ')})` +
           (yields
             ? `, and its walls yield (D/C ${fixed(dc, 2)}): the deformation gathers in it (at least ${NAMES[state ?? 'slight']}).${mechanism}`
             : extreme

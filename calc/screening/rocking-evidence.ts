@@ -191,9 +191,20 @@ export function rockingEvidence(
       if (gap !== null) out.observed.push(shearWallUplift(id, gap));
       return;
     }
-    const a = assessRockingWall(model, isRocking ? hazard : null, gap, {
-      timeHistory: options.timeHistory,
-    });
+    let a;
+    try {
+      a = assessRockingWall(model, isRocking ? hazard : null, gap, {
+        timeHistory: options.timeHistory,
+      });
+    } catch (e) {
+      // Values the model accepted but the assessment cannot use (absurd proportions).
+      findings.invalid(
+        `walls[${index}]`,
+        `wall ${id} cannot be assessed for rocking (${(e as Error).message})${gap !== null ? '; its uplift reading is read as under a shear wall' : ''}`,
+      );
+      if (gap !== null) out.observed.push(shearWallUplift(id, gap));
+      return;
+    }
     for (const c of a.cautions) if (!out.cautions.includes(c)) out.cautions.push(c);
     for (const text of a.assumptions) out.assumptions.push({ wallId: id, text });
     out.walls.push({

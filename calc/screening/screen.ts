@@ -216,11 +216,11 @@ function confidenceOf(
     statement =
       'Confidence normal for a screening: the inputs the verdict uses were entered; defaults are limited to typical loads and model idealisations.';
   }
-  const some = (list: string[]) =>
-    list.slice(0, 3).join('; ') + (list.length > 3 ? `; and ${list.length - 3} more` : '');
-  if (missing.length > 0) statement += ` Missing or unusable: ${some(missingText)}.`;
+  const some = (list: string[], sep: string) =>
+    list.slice(0, 3).join(sep) + (list.length > 3 ? `${sep}and ${list.length - 3} more` : '');
+  if (missing.length > 0) statement += ` Missing or unusable: ${some(missingText, '; ')}.`;
   if (classDefaults.length + key.length > 0) {
-    statement += ` Key defaults: ${some([...classDefaults, ...key])}`;
+    statement += ` Key defaults: ${some([...classDefaults, ...key], ' ')}`;
   }
   return { level, statement, missing: missingText, defaulted, addedBeta };
 }
@@ -364,7 +364,7 @@ export function screen(survey: SurveyInput, options: ScreenOptions = {}): Screen
   // Posting.
   let level: PostingLevel = POSTING_BY_STATE[state];
   const postingReasons: string[] = [
-    `${WORDS[state]} damage → ${POSTING_WORDS[level].word} (Grainline's table: None or Slight → Open, Moderate → Limited entry, Extensive or Complete → Keep out).`,
+    `${state === 'none' ? 'No' : WORDS[state]} damage → ${POSTING_WORDS[level].word} (Grainline's table: None or Slight → Open, Moderate → Limited entry, Extensive or Complete → Keep out).`,
   ];
   const all = [...predicted, ...observed];
   for (const item of all) {

@@ -30,7 +30,7 @@ export const POSTING_WORDS: Readonly<Record<PostingLevel, PostingWords>> = {
   },
   'keep-out': {
     word: 'Keep out',
-    symbol: '⬛',
+    symbol: '■',
     meaning: 'Nobody should enter.',
   },
 };
