@@ -6,6 +6,7 @@
  * statement, the calc version and the cautions. Plain JSON, stored and exported as it is.
  */
 export * from './posting-level.js';
+export { fieldLabel } from './field-label.js';
 export { screen, ADDED_BETA_PER_GROUP, type ScreenOptions } from './screen.js';
 export {
   RESULT_VERSION,

@@ -42,6 +42,7 @@ import {
   type ScreeningProbabilities,
   type ScreeningResult,
 } from './screening-result.js';
+import { fieldLabel } from './field-label.js';
 import { fixed, storeyName } from './text-format.js';
 import { DAMAGE_STATE_WORDS, POSTING_WORDS } from './verdict-words.js';
 
@@ -182,7 +183,7 @@ function confidenceOf(
   rockingDefaults: string[],
   addedBeta: number,
 ): ScreeningConfidence {
-  const missingText = missing.map((m) => `${m.field}: ${m.effect}`);
+  const missingText = missing.map((m) => `${fieldLabel(m.field)}: ${m.effect}`);
   const defaulted = [
     ...classDefaults,
     ...assumptions.filter((a) => ANY_DEFAULT.test(a.id)).map((a) => a.text),

@@ -25,13 +25,8 @@ export function length(m: number): string {
   return `${m.toFixed(2)} m`;
 }
 
-/**
- * A storey for people: survey index 0 is the ground storey, shown as "storey 1 (ground)",
- * the way the survey form counts storeys.
- */
-export function storeyName(index: number): string {
-  return index === 0 ? 'storey 1 (ground)' : `storey ${index + 1}`;
-}
+/** A storey for people (see calc/storey/storey-name.ts). */
+export { storeyName } from '../storey/storey-name.js';
 
 /** The sentence with its first letter in capitals. */
 export function capital(text: string): string {

@@ -20,6 +20,7 @@ import {
   wallContribution,
   type WallContribution,
 } from './wall-contribution.js';
+import { storeyName } from './storey-name.js';
 
 /** Module-local alias: read once, not through an import binding in hot loops. */
 const PLAUSIBLE = PLAUSIBLE_RANGES;
@@ -167,7 +168,7 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
     } else {
       findings.assume(
         `modal.skipped.${direction}`,
-        `No modal model along ${direction}: storey ${zero} has ${stiffness[zero] === null ? 'unknown' : 'zero'} shear-wall stiffness; the period falls back to the next estimate.`,
+        `No modal model along ${direction}: ${storeyName(zero)} has ${stiffness[zero] === null ? 'unknown' : 'zero'} shear-wall stiffness; the period falls back to the next estimate.`,
         'a shear building needs every storey stiffness > 0 (modelling limit)',
       );
     }
@@ -257,7 +258,7 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
       // entry problem rather than pass Infinity on.
       if (ratio !== null && !Number.isFinite(ratio)) {
         findings.invalid(
-          `walls (storey ${i}, ${direction})`,
+          `storeys[${i}].walls.${direction}`,
           'The storey strength is too small to compare with the demand; check the wall values.',
         );
       }

@@ -26,3 +26,4 @@ export type { WallContribution, WallTreatment } from './wall-contribution.js';
 export { CLT_TYPICAL, cltWallResistance } from './clt-connectors.js';
 export type { CltConnectors } from './clt-connectors.js';
 export { Findings } from './findings.js';
+export { storeyName } from './storey-name.js';

@@ -103,11 +103,11 @@ export function storeyLateral(
     if (s.shearWallCount === 0) {
       const why =
         s.rockingWallCount > 0
-          ? 'has only rocking walls (assessed by the rocking module)'
-          : 'has no usable walls recorded (record bare walls as "unsheathed")';
+          ? 'only rocking walls (assessed by the rocking module)'
+          : 'no usable walls recorded (record bare walls as "unsheathed")';
       findings.missing(
-        `walls (storey ${s.storey}, ${direction})`,
-        `storey ${s.storey} ${why} along ${direction}: its shear-wall stiffness and strength are unknown`,
+        `storeys[${s.storey}].walls.${direction}`,
+        `${why}, so its shear-wall stiffness and strength are unknown`,
       );
     } else if (!s.complete) {
       findings.assume(

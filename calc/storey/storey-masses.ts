@@ -3,6 +3,7 @@ import type { BuildingInput, FloorConstruction, RoofConstruction } from '../surv
 import { Findings } from './findings.js';
 import { PLAUSIBLE as PLAUSIBLE_RANGES, plausible, rangeText } from './plausible-ranges.js';
 import { FLOOR_UNIT_WEIGHTS, ROOF_UNIT_WEIGHTS } from './unit-weights.js';
+import { storeyName } from './storey-name.js';
 
 /** Module-local alias: read once, not through an import binding in hot loops. */
 const PLAUSIBLE = PLAUSIBLE_RANGES;
@@ -87,7 +88,7 @@ export function storeyMasses(building: BuildingInput, findings: Findings): Store
         source = `unknown construction '${String(construction)}'`;
         findings.invalid(
           top ? 'building.roofConstruction' : `building.storeys[${carrierIndex}].floorConstruction`,
-          `construction '${String(construction)}' has no default unit weight; mass of storey ${i} unknown`,
+          `construction '${String(construction)}' has no default unit weight; mass of ${storeyName(i)} unknown`,
         );
       } else {
         unitWeightPa = table.pa;
@@ -110,21 +111,21 @@ export function storeyMasses(building: BuildingInput, findings: Findings): Store
     else {
       findings.invalid(
         `building.storeys[${carrierIndex}].floorAreaM2`,
-        `floor area ${String(area)} m² is not a number ${rangeText(PLAUSIBLE.floorAreaM2)} m²; mass of storey ${i} unknown`,
+        `floor area ${String(area)} m² is not a number ${rangeText(PLAUSIBLE.floorAreaM2)} m²; mass of ${storeyName(i)} unknown`,
       );
     }
     let massKg = areaM2 !== null && unitWeightPa !== null ? (areaM2 * unitWeightPa) / g : null;
     if (massKg !== null && !Number.isFinite(massKg)) {
       findings.invalid(
         weightField(top, carrierIndex),
-        `area × unit weight overflows; mass of storey ${i} unknown`,
+        `area × unit weight overflows; mass of ${storeyName(i)} unknown`,
       );
       massKg = null;
     }
     if (massKg === 0) {
       findings.invalid(
         weightField(top, carrierIndex),
-        `storey ${i} carries no mass (unit weight 0 or a floor on grade above the ground storey); modal analysis needs every storey’s mass > 0`,
+        `${storeyName(i)} carries no mass (unit weight 0 or a floor on grade above the ground storey); modal analysis needs every storey’s mass > 0`,
       );
     }
     out[i] = {

@@ -214,7 +214,7 @@ function wallContributionUnchecked(
   if (!Number.isInteger(storey) || storey < 0 || storey >= storeyHeights.length) {
     findings.invalid(
       `walls[${index}].storey`,
-      `storey ${String(storey)} does not exist; wall left out`,
+      `storey index ${String(storey)} does not exist (the building has ${storeyHeights.length} ${storeyHeights.length === 1 ? 'storey' : 'storeys'}); wall left out`,
     );
     return contribution(
       wall,

@@ -8,7 +8,12 @@
  * to screen (nothing missing, nothing to confirm, no entry kept as text). Before that the
  * plots show what the storey model already says, and the card says what is missing.
  */
-import { CALC_VERSION, ROCKING_BAND_LIMITS, spectralAcceleration } from '../../../calc/index.js';
+import {
+  CALC_VERSION,
+  ROCKING_BAND_LIMITS,
+  fieldLabel,
+  spectralAcceleration,
+} from '../../../calc/index.js';
 import type { SurveyRecord } from '../../../forms/index.js';
 import { formatQuantity, shownUnit, type UnitSystem } from '../../../forms/units/index.js';
 import { CautionNote } from '../../app/caution-note.js';
@@ -303,7 +308,9 @@ export function ResultView(props: {
               {missing.map((m, i) => (
                 <li key={`${m.field}${i}`}>
                   <span aria-hidden="true">{m.problem === 'invalid' ? '✖ ' : '○ '}</span>
-                  <code>{m.field}</code>: {m.effect}
+                  {/* Words first for the inspector; the raw path for the engineer. */}
+                  <strong>{fieldLabel(m.field)}</strong>: {m.effect}{' '}
+                  <code class="field-path">{m.field}</code>
                 </li>
               ))}
             </ul>
