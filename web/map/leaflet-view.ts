@@ -38,6 +38,17 @@ export interface MapViewCallbacks {
   onTileStatus(status: TileStatus): void;
   /** After markers were drawn for a view (the benchmark waits for the first). */
   onRendered?(markers: number): void;
+  /** A tap on the map itself (not on a marker); the location picker uses it. */
+  onMapTap?(lat: number, lon: number): void;
+  /** After the view stopped moving, with its centre (the location picker shows it). */
+  onMoved?(centre: MapCentre): void;
+}
+
+/** The centre of the view and its zoom level. */
+export interface MapCentre {
+  lat: number;
+  lon: number;
+  zoom: number;
 }
 
 export interface MapView {
@@ -45,6 +56,9 @@ export interface MapView {
   setSelected(id: string | null): void;
   fitToData(): void;
   setBasemap(layer: BasemapLayer): void;
+  /** Centres the view on a point; with `zoom` omitted the zoom level stays. */
+  centreOn(lat: number, lon: number, zoom?: number): void;
+  centre(): MapCentre;
   invalidateSize(): void;
   destroy(): void;
 }
@@ -223,7 +237,14 @@ export function createMapView(
     markStreetZoom();
   });
   markStreetZoom();
-  map.on('moveend', () => void render());
+  map.on('moveend', () => {
+    void render();
+    const c = map.getCenter();
+    callbacks.onMoved?.({ lat: c.lat, lon: c.lng, zoom: map.getZoom() });
+  });
+  // Marker clicks do not bubble to the map (Leaflet's default for markers), so this is a
+  // tap on the background.
+  map.on('click', (e: L.LeafletMouseEvent) => callbacks.onMapTap?.(e.latlng.lat, e.latlng.lng));
 
   function dataBounds(): L.LatLngBounds | null {
     if (points.length === 0) return null;
@@ -324,6 +345,13 @@ export function createMapView(
       watchTiles(tiles);
       basemap = tiles.addTo(map);
       attribution.set(layer.info.attribution ?? layer.info.name ?? '', '');
+    },
+    centreOn(lat, lon, zoom) {
+      map.setView([lat, lon], zoom ?? map.getZoom(), { animate: zoom === undefined });
+    },
+    centre() {
+      const c = map.getCenter();
+      return { lat: c.lat, lon: c.lng, zoom: map.getZoom() };
     },
     invalidateSize() {
       map.invalidateSize();

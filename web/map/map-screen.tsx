@@ -13,6 +13,7 @@ import '../styles/map.css';
 import { ExchangeActions, deviceStore } from '../exchange/index.js';
 import type { SurveyRecord } from '../../forms/index.js';
 import { t } from '../i18n/index.js';
+import { basemapLayerFor } from './basemap-layer.js';
 import { BasemapPanel } from './basemap-panel.js';
 import { ClusterClient } from './cluster-client.js';
 import { deleteBasemap, listBasemaps, putBasemap, type StoredBasemap } from './basemap-store.js';
@@ -206,19 +207,7 @@ export function MapScreen() {
   // The basemap layer follows the choice; an archive is opened from the device.
   useEffect(() => {
     if (!viewReady || !view.current) return;
-    const v = view.current;
-    if (choice.kind === 'none') v.setBasemap({ kind: 'none' });
-    else if (choice.kind === 'online') v.setBasemap({ kind: 'online', service });
-    else {
-      const stored = archives.find((a) => a.id === choice.id);
-      if (!stored) v.setBasemap({ kind: 'none' });
-      else
-        v.setBasemap({
-          kind: 'archive',
-          archive: new BasemapArchive(stored.blob, stored.id),
-          info: stored.info,
-        });
-    }
+    view.current.setBasemap(basemapLayerFor(choice, service, archives));
   }, [viewReady, choice, service, archives]);
 
   // The map's size changes when a side panel opens on a wide screen.

@@ -81,6 +81,19 @@ export const screens = {
   'place.gps.poor':
     'The GPS position is rough (more than 50 m). Check it, or type the coordinates.',
   'place.mapHint': 'Or type the coordinates in decimal degrees (WGS84).',
+  'place.pickOnMap': 'Pick on the map',
+  'place.picker.title': 'Pick the position on the map',
+  'place.picker.hint':
+    'Drag the map, or tap a spot to bring it under the cross. Put the cross on the building, then use the point.',
+  'place.picker.mapLabel': 'Map for picking the position',
+  'place.picker.centre': 'Under the cross: {lat}, {lon}',
+  'place.picker.loading': 'Opening the map…',
+  'place.picker.failed': 'The map could not open. Use GPS or type the coordinates.',
+  'place.picker.noTiles':
+    'No map tiles: place the cross by the grid, the scale bar and the buildings already surveyed.',
+  'place.picker.zoomIn': 'Zoom in to the street before using the point.',
+  'place.picker.use': 'Use this point',
+  'place.picker.cancel': 'Cancel',
   'place.people': 'Inspection',
   'place.visit.first': 'First visit',
   'place.visit.again': 'Re-inspection',

@@ -14,6 +14,7 @@ import {
   type NumberSpec,
 } from '../../../forms/fields/index.js';
 import { formatNumber, formatQuantity, shownUnit } from '../../../forms/units/index.js';
+import { LocationPicker } from '../../map/location-picker.js';
 import { t } from '../../i18n/index.js';
 import { applyFieldChange } from './record-edit.js';
 import { applyCoordinateChange, clearLocation, setLocation } from './location-edit.js';
@@ -42,6 +43,7 @@ const GPS_TIMEOUT_MS = 30_000;
 export function PlaceStep({ ctx }: StepProps) {
   const { record, edit, system } = ctx;
   const [gps, setGps] = useState<GpsState>({ phase: 'idle' });
+  const [picking, setPicking] = useState(false);
   const text = (c: FieldChange) => edit((r) => applyFieldChange(r, c));
   const coord = (c: FieldChange) => edit((r) => applyCoordinateChange(r, c, system));
   const loc = record.location;
@@ -114,6 +116,14 @@ export function PlaceStep({ ctx }: StepProps) {
           >
             <span aria-hidden="true">◎</span> {t('place.useGps')}
           </button>
+          <button
+            type="button"
+            class="button"
+            aria-expanded={picking}
+            onClick={() => setPicking(!picking)}
+          >
+            <span aria-hidden="true">✛</span> {t('place.pickOnMap')}
+          </button>
           {loc && (
             <button type="button" class="button" onClick={() => edit(clearLocation)}>
               {t('place.clearPosition')}
@@ -124,6 +134,17 @@ export function PlaceStep({ ctx }: StepProps) {
           {gps.phase === 'finding' && t('place.gps.finding')}
           {gps.phase === 'failed' && gps.message}
         </p>
+        {picking && (
+          <LocationPicker
+            start={loc ? { lat: loc.lat, lon: loc.lon } : null}
+            surveyId={record.id}
+            onUse={(lat, lon) => {
+              setPicking(false);
+              edit((r) => setLocation(r, lat, lon, null, 'map'));
+            }}
+            onCancel={() => setPicking(false)}
+          />
+        )}
         <p class="field__hint">{t('place.mapHint')}</p>
         <div class="field-pair">
           <NumberField
