@@ -31,11 +31,15 @@ export const result = {
   'result.band.topple': 'topples',
   'result.gaugeSummary':
     'Wall {id}: observed θ/α {observed}, estimated under the hazard {predicted}.',
+  'result.gaugeSummaryAlike':
+    '{count} walls alike ({id}): observed θ/α {observed}, estimated under the hazard {predicted}, each.',
   'result.evidenceTitle': 'Evidence',
   'result.evidence.what': 'What',
   'result.evidence.value': 'Value',
   'result.evidence.threshold': 'Limit',
   'result.evidence.over': 'past the limit',
+  'result.evidence.samePlaces': '{count} alike: ',
+  'result.evidence.sameForAll': '(The same for all {count}.)',
   'result.assumedTitle': 'Assumed, defaulted or missing',
   'result.nothingAssumed': 'Nothing was assumed.',
   'result.missingTitle': 'Missing or unusable inputs',
@@ -72,4 +76,5 @@ export const result = {
   'verdict.governed.none': 'nothing predicted or seen',
   'verdict.assessment': 'Needs a detailed assessment by an engineer',
   'verdict.why': 'Why, in full',
+  'verdict.confidenceListed': 'They are listed under “Assumed, defaulted or missing” below.',
 } as const;

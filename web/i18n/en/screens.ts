@@ -292,6 +292,7 @@ export const screens = {
   'plot.driftAxis': 'Drift (%)',
   'plot.storeyShort': 'Storey {n}',
   'plot.gaugeTitle': 'Rocking of wall {id}: θ/α',
+  'plot.noValues': 'none recorded',
   'plot.observed': 'Observed',
   'plot.predicted': 'Estimated',
   'plot.notKnown': 'not known',

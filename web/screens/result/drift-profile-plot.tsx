@@ -143,6 +143,9 @@ export function DriftProfilePlot(p: DriftProfileProps) {
               <Marker kind={s.marker} x={10} y={10} />
             </svg>
             {s.label}
+            {s.ratios.every((r) => r === null) && (
+              <span class="muted"> · {t('plot.noValues')}</span>
+            )}
           </li>
         ))}
       </ul>

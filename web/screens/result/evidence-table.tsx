@@ -8,6 +8,7 @@ import type { EvidenceItem } from '../../../calc/index.js';
 import { formatQuantity, shownUnit, type UnitSystem } from '../../../forms/units/index.js';
 import { damageStateLabels } from '../../app/posting-style.js';
 import { t } from '../../i18n/index.js';
+import { groupEvidence } from './evidence-groups.js';
 
 function valueText(item: EvidenceItem, system: UnitSystem): string {
   if (item.value === null) return item.valueText;
@@ -41,11 +42,18 @@ function List(props: {
         {props.title}
       </h3>
       <ul class="evidence__list" aria-labelledby={props.id}>
-        {props.items.map((e) => (
+        {groupEvidence(props.items).map(({ item: e, places }) => (
           <li key={e.id} class={passed(e) ? 'ev ev--over' : 'ev'}>
             <p class="ev__head">
               {e.label}
-              {e.where && <span class="ev__where"> · {e.where}</span>}
+              {places.length === 1 && <span class="ev__where"> · {places[0]}</span>}
+              {places.length > 1 && (
+                <span class="ev__where">
+                  {' '}
+                  · {t('result.evidence.samePlaces', { count: places.length })}
+                  {places.map((p) => p.split(' ').pop()).join(', ')}
+                </span>
+              )}
             </p>
             <p class="ev__value">
               <strong>{valueText(e, props.system)}</strong>
@@ -63,7 +71,10 @@ function List(props: {
             <p class="ev__limit">
               {t('result.evidence.threshold')}: {e.thresholdText}
             </p>
-            <p class="ev__text">{e.text}</p>
+            <p class="ev__text">
+              {e.text}
+              {places.length > 1 && ` ${t('result.evidence.sameForAll', { count: places.length })}`}
+            </p>
           </li>
         ))}
       </ul>

@@ -22,6 +22,7 @@ import { t } from '../../i18n/index.js';
 import { sampleSpectrum } from '../survey/hazard-step.js';
 import type { StepIssues } from '../survey/step-issues.js';
 import { DriftProfilePlot, type DriftSeries } from './drift-profile-plot.js';
+import { groupAlike } from './evidence-groups.js';
 import { EvidenceTables } from './evidence-table.js';
 import { PrintHeader } from './print-header.js';
 import type { ResultModel } from './result-model.js';
@@ -142,6 +143,16 @@ export function ResultView(props: {
         reasons: a.reasons,
       }));
 
+  // Walls with the same figures and reasons share one gauge (a CLT building often has a
+  // dozen alike); each is still named.
+  const gaugeGroups = groupAlike(gauges, (g) =>
+    JSON.stringify([
+      g.observed?.toFixed(2) ?? null,
+      g.predicted?.toFixed(2) ?? null,
+      g.reasons.map((r) => r.split(g.wallId).join('\u0000')),
+    ]),
+  );
+
   const missing = s ? s.missingInputs : (r?.missingInputs ?? []);
   const assumptions = s
     ? s.assumptions.map((a) => ({ key: a.id, text: a.text, source: a.source }))
@@ -255,11 +266,11 @@ export function ResultView(props: {
       {gauges.length > 0 && (
         <section class="card" aria-labelledby="rocking-title">
           <h2 id="rocking-title">{t('result.rockingTitle')}</h2>
-          {gauges.map((g) => (
+          {gaugeGroups.map(({ first: g, members }) => (
             <div key={g.wallId} class="rocking-wall">
               <RockingGauge
                 id={`gauge-${g.wallId.replace(/[^A-Za-z0-9-]/g, '-')}`}
-                wallId={g.wallId}
+                wallId={members.map((m) => m.wallId).join(', ')}
                 observed={g.observed}
                 predicted={g.predicted}
                 limits={[
@@ -267,11 +278,15 @@ export function ResultView(props: {
                   { ratio: ROCKING_BAND_LIMITS.large, label: t('result.band.near') },
                   { ratio: ROCKING_BAND_LIMITS.nearToppling, label: t('result.band.topple') },
                 ]}
-                summary={t('result.gaugeSummary', {
-                  id: g.wallId,
-                  observed: g.observed !== null ? g.observed.toFixed(2) : t('plot.notKnown'),
-                  predicted: g.predicted !== null ? g.predicted.toFixed(2) : t('plot.notKnown'),
-                })}
+                summary={t(
+                  members.length > 1 ? 'result.gaugeSummaryAlike' : 'result.gaugeSummary',
+                  {
+                    id: members.map((m) => m.wallId).join(', '),
+                    count: members.length,
+                    observed: g.observed !== null ? g.observed.toFixed(2) : t('plot.notKnown'),
+                    predicted: g.predicted !== null ? g.predicted.toFixed(2) : t('plot.notKnown'),
+                  },
+                )}
               />
               {g.reasons.length > 0 && (
                 <ul class="flags">

@@ -132,7 +132,22 @@ export function VerdictCard(props: {
           ))}
         </ul>
       </details>
-      <p class={`confidence confidence--${s.confidence.level}`}>{s.confidence.statement}</p>
+      <p class={`confidence confidence--${s.confidence.level}`}>
+        {/* On screen the lists follow under "Assumed, defaulted or missing"; a print skips
+            those lists, so the page keeps the whole statement. */}
+        <span class="print-skip">
+          {confidenceHeadline(s.confidence.statement)}
+          {confidenceHeadline(s.confidence.statement) !== s.confidence.statement &&
+            ` ${t('verdict.confidenceListed')}`}
+        </span>
+        <span class="print-only">{s.confidence.statement}</span>
+      </p>
     </section>
   );
+}
+
+/** The statement up to its lists of missing inputs and key defaults. */
+export function confidenceHeadline(statement: string): string {
+  const cut = statement.search(/ (Missing or unusable|Key defaults):/);
+  return cut === -1 ? statement : statement.slice(0, cut);
 }
