@@ -4,7 +4,13 @@
 // never crash it and never put NaN or Infinity in the result.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { damageStateRank, postingRank, screen } from '../../calc/index.js';
+import {
+  CHECKLIST_RULES,
+  WALL_UNIT_VALUES,
+  damageStateRank,
+  postingRank,
+  screen,
+} from '../../calc/index.js';
 import type {
   ChecklistEntry,
   ChecklistItem,
@@ -15,25 +21,9 @@ import type {
   WallType,
 } from '../../calc/index.js';
 
-const ITEMS: ChecklistItem[] = [
-  'cracked-or-split-members',
-  'fastener-withdrawal',
-  'hold-down-or-bracket-damage',
-  'sill-plate-sliding',
-  'foundation-movement',
-  'leaning-cripple-wall-or-soft-storey',
-  'falling-hazard',
-  'ground-failure',
-];
-const SHEAR_TYPES: WallType[] = [
-  'wsp-150',
-  'wsp-100',
-  'wsp-75',
-  'wsp-50',
-  'gypsum',
-  'diagonal-boards',
-  'unsheathed',
-];
+// From calc's own tables, so a new item or sheathing type is covered without editing here.
+const ITEMS = Object.keys(CHECKLIST_RULES) as ChecklistItem[];
+const SHEAR_TYPES = Object.keys(WALL_UNIT_VALUES) as WallType[];
 
 function wallOf(
   storey: number,
