@@ -11,6 +11,7 @@ import { paths } from '../../app/routes.js';
 import { t } from '../../i18n/index.js';
 import type { StepIssues } from '../survey/step-issues.js';
 import { STEPS, stepLabels } from '../survey/steps.js';
+import { confidenceHeadline } from './confidence-headline.js';
 
 function Probabilities({ s }: { s: ScreeningResult }) {
   const p = s.damage.probabilities;
@@ -144,10 +145,4 @@ export function VerdictCard(props: {
       </p>
     </section>
   );
-}
-
-/** The statement up to its lists of missing inputs and key defaults. */
-export function confidenceHeadline(statement: string): string {
-  const cut = statement.search(/ (Missing or unusable|Key defaults):/);
-  return cut === -1 ? statement : statement.slice(0, cut);
 }
