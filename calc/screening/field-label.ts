@@ -8,6 +8,16 @@ import { storeyName } from '../storey/storey-name.js';
  * in `missingInputs[].field` for engineers and software.
  */
 export function fieldLabel(path: string): string {
+  // Several paths of one finding ("walls[0].positionM, walls[3].positionM").
+  if (path.includes(', ')) {
+    const labels = path.split(', ').map(fieldLabel);
+    const walls = labels.map((l) => /^wall (\d+), (.+)$/.exec(l));
+    const prop = walls[0]?.[2];
+    if (prop !== undefined && walls.every((m) => m !== null && m[2] === prop)) {
+      return `${prop} of walls ${walls.map((m) => m![1]).join(', ')}`;
+    }
+    return labels.join('; ');
+  }
   const storeyWalls = /^storeys\[(\d+)\]\.walls\.(x|y)$/.exec(path);
   if (storeyWalls) return `walls of ${storeyName(Number(storeyWalls[1]))} along ${storeyWalls[2]}`;
   const directionWalls = /^walls \((x|y)\)$/.exec(path);

@@ -293,7 +293,7 @@ function directionResponse(direction: Direction, s: Shared): DirectionResponse {
     if (fields !== '') {
       findings.missing(
         fields,
-        `wall positions unknown: torsional eccentricity along ${direction} not computed for storeys ${unplacedStoreys.join(', ')}`,
+        `wall positions unknown: torsional eccentricity along ${direction} not computed for ${unplacedStoreys.map(storeyName).join(', ')}`,
       );
     }
   }

@@ -2,6 +2,7 @@ import type { Direction, WallInput } from '../survey/survey-input.js';
 import { Findings } from './findings.js';
 import { PLAUSIBLE as PLAUSIBLE_RANGES, plausible } from './plausible-ranges.js';
 import type { WallContribution } from './wall-contribution.js';
+import { storeyName } from './storey-name.js';
 
 /** Module-local alias: read once, not through an import binding in hot loops. */
 const PLAUSIBLE = PLAUSIBLE_RANGES;
@@ -112,10 +113,16 @@ export function storeyLateral(
     } else if (!s.complete) {
       findings.assume(
         `storey.partial.${direction}.${s.storey}`,
-        `Storey ${s.storey} along ${direction}: some walls lack values; stiffness and strength are lower bounds.`,
+        `${capitalStorey(s.storey)} along ${direction}: some walls lack values; stiffness and strength are lower bounds.`,
         'walls with missing values left out (modelling choice)',
       );
     }
   }
   return out;
+}
+
+/** "Storey 1 (ground)", for the start of a sentence. */
+function capitalStorey(index: number): string {
+  const name = storeyName(index);
+  return name[0]!.toUpperCase() + name.slice(1);
 }

@@ -17,6 +17,15 @@ describe('fieldLabel', () => {
     expect(fieldLabel('hazard')).toBe('hazard');
   });
 
+  it('reads a finding about several walls as one phrase', () => {
+    expect(fieldLabel('walls[0].positionM, walls[1].positionM, walls[4].positionM')).toBe(
+      'position of walls 1, 2, 5',
+    );
+    expect(fieldLabel('walls[0].positionM, building.roofConstruction')).toBe(
+      'wall 1, position; roof construction',
+    );
+  });
+
   it('returns a path it does not know without hiding it', () => {
     expect(fieldLabel('observations.uplift (wall S1X1)')).toContain('S1X1');
     expect(fieldLabel('')).toBe('');
