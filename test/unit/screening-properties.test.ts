@@ -4,6 +4,7 @@
 // never crash it and never put NaN or Infinity in the result.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { emptySurvey } from '../../forms/schema/index.js';
 import {
   CHECKLIST_RULES,
   WALL_UNIT_VALUES,
@@ -338,22 +339,8 @@ describe('screen() on odd inputs', () => {
   });
 
   it('does not crash on a survey with nothing entered: no storeys, walls, hazard or observations', () => {
-    const r = screen({
-      building: {
-        system: 'light-frame',
-        codeLevel: 'unknown',
-        occupancy: 'single-family',
-        planXM: null,
-        planYM: null,
-        storeys: [],
-        roofConstruction: 'light',
-        roofUnitWeightPa: null,
-      },
-      walls: [],
-      observations: { uplift: [], residualDrift: [], checklist: [], notes: '' },
-      hazard: null,
-      measured: null,
-    });
+    // The record the app starts every new survey with.
+    const r = screen(emptySurvey('test-device', new Date(0)));
     expect(r.damageState).toBe('none');
     expect(r.confidence.level).toBe('low');
     expect(r.missingInputs.length).toBeGreaterThan(0);

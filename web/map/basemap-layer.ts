@@ -33,13 +33,26 @@ export function basemapLayerFor(
   };
 }
 
-/** Reads the settings and returns the layer; any read that fails counts as "not set". */
-export async function loadBasemapLayer(): Promise<BasemapLayer> {
+/** The team's basemap settings and the archives stored on the device. */
+export interface BasemapSettings {
+  choice: BasemapChoice;
+  service: TileService;
+  archives: StoredBasemap[];
+}
+
+/** Reads the settings; any read that fails counts as "not set". Never rejects. */
+export async function loadBasemapSettings(): Promise<BasemapSettings> {
   const store = deviceStore();
   const [c, s, a] = await Promise.all([
     store.getSetting(BASEMAP_SETTING).catch(() => undefined),
     store.getSetting(TILES_SETTING).catch(() => undefined),
     listBasemaps().catch(() => [] as StoredBasemap[]),
   ]);
-  return basemapLayerFor(readBasemapChoice(c), readTileService(s), a);
+  return { choice: readBasemapChoice(c), service: readTileService(s), archives: a };
+}
+
+/** Reads the settings and returns the layer to draw. */
+export async function loadBasemapLayer(): Promise<BasemapLayer> {
+  const { choice, service, archives } = await loadBasemapSettings();
+  return basemapLayerFor(choice, service, archives);
 }

@@ -13,7 +13,7 @@ import '../styles/map.css';
 import { ExchangeActions, deviceStore } from '../exchange/index.js';
 import type { SurveyRecord } from '../../forms/index.js';
 import { t } from '../i18n/index.js';
-import { basemapLayerFor } from './basemap-layer.js';
+import { basemapLayerFor, loadBasemapSettings } from './basemap-layer.js';
 import { BasemapPanel } from './basemap-panel.js';
 import { ClusterClient } from './cluster-client.js';
 import { deleteBasemap, listBasemaps, putBasemap, type StoredBasemap } from './basemap-store.js';
@@ -39,8 +39,6 @@ import {
   BASEMAP_SETTING,
   OSM_TILES,
   TILES_SETTING,
-  readBasemapChoice,
-  readTileService,
   type BasemapChoice,
   type TileService,
 } from './tile-settings.js';
@@ -125,15 +123,10 @@ export function MapScreen() {
   useEffect(() => {
     mark('grainline:map-open');
     reload();
-    const store = deviceStore();
-    void Promise.all([
-      store.getSetting(BASEMAP_SETTING).catch(() => undefined),
-      store.getSetting(TILES_SETTING).catch(() => undefined),
-      listBasemaps().catch(() => [] as StoredBasemap[]),
-    ]).then(([c, s, a]) => {
-      setChoice(readBasemapChoice(c));
-      setService(readTileService(s));
-      setArchives(a);
+    void loadBasemapSettings().then((b) => {
+      setChoice(b.choice);
+      setService(b.service);
+      setArchives(b.archives);
     });
     let cancelled = false;
     // The clustering worker starts now, so its code is loaded by the time the surveys are.
